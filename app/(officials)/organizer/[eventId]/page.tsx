@@ -1,0 +1,84 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { EventHeading } from "@/components/event-heading";
+import { StatusCounts } from "@/components/status-counts";
+import { listEventEntries } from "@/db/queries/list-event-entries";
+import { listEventOfficials } from "@/db/queries/list-event-officials";
+import { loadEventPage } from "@/lib/auth/load-event-page";
+import { roleLabels } from "@/lib/auth/roles";
+import { formatMoney } from "@/lib/format-money";
+
+export const metadata: Metadata = { title: "Organizer" };
+
+export default async function OrganizerPage({ params }: { params: Promise<{ eventId: string }> }) {
+  const { eventId } = await params;
+  const { event } = await loadEventPage({
+    eventId,
+    permission: "event.manage",
+    returnTo: `/organizer/${eventId}`,
+  });
+  const [entries, officials] = await Promise.all([
+    listEventEntries({ eventId }),
+    listEventOfficials({ eventId }),
+  ]);
+  const byClass = new Map<string, number>();
+  for (const row of entries)
+    byClass.set(row.declaredClass, (byClass.get(row.declaredClass) ?? 0) + 1);
+  const facts: [string, string][] = [
+    ["Club", event.clubName],
+    ["Venue", `${event.venueName} (${(event.trackLengthM / 1000).toFixed(2)} km)`],
+    ["Status", event.status],
+    ["Entries", `${entries.length} of ${event.capacity}`],
+    ["Entry fee", formatMoney(event.entryFeeMinor, event.currency)],
+    ["Units on the tech line", event.unitSystem === "mm" ? "millimetres" : "inches"],
+    ["Time zone", event.timeZone],
+    ["Rule set", `version ${event.ruleSetVersion} (pinned)`],
+  ];
+  return (
+    <div className="space-y-6">
+      <EventHeading roleLabel="Organizer" title="The event" event={event}>
+        <div className="flex flex-wrap gap-2">
+          <Link href={`/tech/${eventId}`} className="btn-secondary">
+            Tech line
+          </Link>
+        </div>
+      </EventHeading>
+      <dl className="card grid gap-x-6 gap-y-2 sm:grid-cols-2" data-testid="event-facts">
+        {facts.map(([label, value]) => (
+          <div key={label}>
+            <dt className="text-base font-semibold text-asphalt-700">{label}</dt>
+            <dd className="text-lg">{value}</dd>
+          </div>
+        ))}
+      </dl>
+      <section className="space-y-2">
+        <h2 className="text-2xl font-bold">Tech line so far</h2>
+        <StatusCounts rows={entries} />
+      </section>
+      <section className="space-y-2">
+        <h2 className="text-2xl font-bold">Entries by declared class</h2>
+        <ul className="flex flex-wrap gap-2">
+          {[...byClass.entries()].map(([cls, count]) => (
+            <li
+              key={cls}
+              className="rounded-full border-2 border-asphalt-700 px-3 py-1 font-semibold"
+            >
+              {cls}: <span className="tabular">{count}</span>
+            </li>
+          ))}
+        </ul>
+      </section>
+      <section className="space-y-2">
+        <h2 className="text-2xl font-bold">Officials</h2>
+        <ul className="card divide-y divide-asphalt-200">
+          {officials.map((o) => (
+            <li key={`${o.userId}-${o.role}`} className="flex justify-between gap-3 py-2">
+              <span>{o.name}</span>
+              <span className="font-semibold">{roleLabels[o.role]}</span>
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}

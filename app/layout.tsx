@@ -1,0 +1,38 @@
+import "@fontsource/barlow/400.css";
+import "@fontsource/barlow/500.css";
+import "@fontsource/barlow/600.css";
+import "@fontsource/barlow/700.css";
+import "./globals.css";
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { SiteFooter } from "@/components/site-footer";
+import { SiteHeader } from "@/components/site-header";
+import { getSessionUser } from "@/lib/auth/get-session-user";
+import { Providers } from "./providers";
+import { signOutAction } from "./sign-out-action";
+
+export const metadata: Metadata = {
+  title: { default: "Plumbline", template: "%s · Plumbline" },
+  description: "Scrutineering, classing and run groups for club time-attack days.",
+  applicationName: "Plumbline",
+};
+
+export const viewport: Viewport = { themeColor: "#101214", width: "device-width", initialScale: 1 };
+
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await getSessionUser();
+  return (
+    <html lang="en-GB">
+      <body className="flex min-h-dvh flex-col">
+        <SiteHeader
+          userName={user ? (user.name ?? user.email) : null}
+          signOutAction={signOutAction}
+        />
+        <main className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+          <Providers>{children}</Providers>
+        </main>
+        <SiteFooter />
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,54 @@
+import { DrizzleAdapter } from "@auth/drizzle-adapter";
+import NextAuth from "next-auth";
+import Credentials from "next-auth/providers/credentials";
+import Nodemailer from "next-auth/providers/nodemailer";
+import { authConfig } from "./auth.config";
+import { getDb } from "./db/client";
+import { getUserByEmail } from "./db/queries/get-user-by-email";
+import { accounts, sessions, users, verificationTokens } from "./db/schema";
+import { verifyPassword } from "./lib/auth/password";
+import { passwordSignInSchema } from "./lib/auth/sign-in-schema";
+import { env } from "./lib/env";
+import { composeSignInMail } from "./lib/mail/compose-sign-in-mail";
+import { sendMail } from "./lib/mail/send-mail";
+
+const LINK_VALID_MINUTES = 30;
+
+export const { handlers, auth, signIn, signOut } = NextAuth({
+  ...authConfig,
+  adapter: DrizzleAdapter(getDb(), {
+    usersTable: users,
+    accountsTable: accounts,
+    sessionsTable: sessions,
+    verificationTokensTable: verificationTokens,
+  }),
+  providers: [
+    Nodemailer({
+      server: { host: env.SMTP_HOST, port: env.SMTP_PORT, secure: false },
+      from: env.MAIL_FROM,
+      maxAge: LINK_VALID_MINUTES * 60,
+      async sendVerificationRequest({ identifier, url }) {
+        const mail = composeSignInMail({
+          url,
+          host: new URL(url).host,
+          validMinutes: LINK_VALID_MINUTES,
+        });
+        await sendMail({ ...mail, to: identifier, kind: "sign-in-link" });
+      },
+    }),
+    Credentials({
+      credentials: {
+        email: { label: "E-mail" },
+        password: { label: "Password", type: "password" },
+      },
+      async authorize(raw) {
+        const parsed = passwordSignInSchema.safeParse(raw);
+        if (!parsed.success) return null;
+        const user = await getUserByEmail({ email: parsed.data.email });
+        const ok = await verifyPassword(parsed.data.password, user?.passwordHash);
+        if (!user || !ok) return null;
+        return { id: user.id, name: user.name, email: user.email };
+      },
+    }),
+  ],
+});

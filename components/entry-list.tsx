@@ -1,0 +1,88 @@
+"use client";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import type { EntryListRow } from "@/lib/entries/to-entry-list-row";
+import { VerdictBadge } from "./verdict-badge";
+
+/** A searchable list of entries, car number first. `hrefFor` gives each row a link. */
+export function EntryList({
+  rows,
+  hrefBase,
+  emptyText = "No entries yet.",
+}: {
+  rows: EntryListRow[];
+  hrefBase?: string;
+  emptyText?: string;
+}) {
+  const [query, setQuery] = useState("");
+  const shown = useMemo(() => filterRows(rows, query), [rows, query]);
+  return (
+    <div className="space-y-3">
+      <label className="block">
+        <span className="field-label">Find a car</span>
+        <input
+          className="field-input"
+          inputMode="search"
+          placeholder="Car number, driver or car"
+          value={query}
+          onChange={(e) => setQuery(e.target.value)}
+          data-testid="entry-search"
+        />
+      </label>
+      <p className="text-base text-asphalt-700" aria-live="polite">
+        {shown.length} of {rows.length} cars
+      </p>
+      {shown.length === 0 ? <p className="card">{emptyText}</p> : null}
+      <ul className="space-y-2">
+        {shown.map((row) => {
+          const body = (
+            <div className="flex items-start gap-3">
+              <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 py-1 text-center text-2xl font-bold text-asphalt-50">
+                {row.carNumber}
+              </span>
+              <div className="min-w-0 flex-1">
+                <div className="flex flex-wrap items-center gap-2">
+                  <span className="text-lg font-semibold">{row.car}</span>
+                  <span className="rounded border border-asphalt-400 px-2 text-base">
+                    {row.finalClass ?? row.declaredClass}
+                  </span>
+                </div>
+                <p className="text-base text-asphalt-800">{row.drivers}</p>
+                {row.reason ? <p className="text-base text-asphalt-800">{row.reason}</p> : null}
+              </div>
+              <div className="flex flex-col items-end gap-1">
+                <VerdictBadge status={row.status} toClass={row.finalClass} />
+                {row.needsChief ? (
+                  <span className="text-base font-semibold text-attention">Chief scrutineer</span>
+                ) : null}
+              </div>
+            </div>
+          );
+          return (
+            <li
+              key={row.entryId}
+              className="card"
+              data-testid="entry-row"
+              data-car-number={row.carNumber}
+            >
+              {hrefBase ? (
+                <Link href={`${hrefBase}/${row.entryId}`} className="block min-h-touch">
+                  {body}
+                </Link>
+              ) : (
+                body
+              )}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}
+
+function filterRows(rows: EntryListRow[], query: string): EntryListRow[] {
+  const q = query.trim().toLowerCase();
+  if (!q) return rows;
+  if (/^\d+$/.test(q)) return rows.filter((r) => String(r.carNumber).startsWith(q));
+  return rows.filter((r) => `${r.car} ${r.drivers} ${r.declaredClass}`.toLowerCase().includes(q));
+}

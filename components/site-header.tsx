@@ -1,0 +1,44 @@
+import Link from "next/link";
+import { PlumbMark } from "./icons/plumb-mark";
+
+export function SiteHeader({
+  userName,
+  signOutAction,
+}: {
+  userName: string | null;
+  signOutAction?: () => Promise<void>;
+}) {
+  return (
+    <header className="border-b-4 border-accent bg-asphalt-950 text-asphalt-50">
+      <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
+        <Link
+          href={userName ? "/home" : "/"}
+          className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-wide"
+        >
+          <PlumbMark className="size-8 text-asphalt-50" />
+          Plumbline
+        </Link>
+        {userName && signOutAction ? (
+          <form action={signOutAction} className="flex items-center gap-3">
+            <span className="hidden text-base sm:inline" data-testid="signed-in-as">
+              {userName}
+            </span>
+            <button
+              type="submit"
+              className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+            >
+              Sign out
+            </button>
+          </form>
+        ) : (
+          <Link
+            href="/sign-in"
+            className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+          >
+            Sign in
+          </Link>
+        )}
+      </div>
+    </header>
+  );
+}

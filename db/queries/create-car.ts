@@ -1,0 +1,32 @@
+import "server-only";
+import { v7 as uuidv7 } from "uuid";
+import type { z } from "zod";
+import type { carInputSchema } from "../../lib/cars/car-schema";
+import { getDb } from "../client";
+import { auditLog, cars } from "../schema";
+
+/** Add a car to a person's garage (and the audit log) in one transaction. */
+export async function createCar({
+  ownerId,
+  car,
+}: {
+  ownerId: string;
+  car: z.output<typeof carInputSchema>;
+}): Promise<{ id: string }> {
+  const id = uuidv7();
+  const now = new Date();
+  await getDb().transaction(async (tx) => {
+    await tx
+      .insert(cars)
+      .values({ id, ownerId, ...car, notes: car.notes || null, createdAt: now, updatedAt: now });
+    await tx.insert(auditLog).values({
+      actorId: ownerId,
+      action: "car.create",
+      subjectType: "car",
+      subjectId: id,
+      detail: { make: car.make, model: car.model },
+      createdAt: now,
+    });
+  });
+  return { id };
+}

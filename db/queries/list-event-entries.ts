@@ -1,0 +1,46 @@
+import "server-only";
+import { and, asc, eq } from "drizzle-orm";
+import { alias } from "drizzle-orm/mysql-core";
+import { getDb } from "../client";
+import { cars, entries, users, verdicts } from "../schema";
+
+const coDriver = alias(users, "co_driver");
+
+/** An event's entries (not withdrawn) with car, drivers and the stored verdict, by car number. */
+export async function listEventEntries({ eventId }: { eventId: string }) {
+  const rows = await getDb()
+    .select({
+      entryId: entries.id,
+      carNumber: entries.carNumber,
+      declaredClass: entries.declaredClass,
+      lapTimeEstimateMs: entries.lapTimeEstimateMs,
+      make: cars.make,
+      model: cars.model,
+      year: cars.year,
+      colour: cars.colour,
+      driverName: users.name,
+      coDriverName: coDriver.name,
+      status: verdicts.status,
+      finalClass: verdicts.finalClass,
+      reason: verdicts.reason,
+      needsChief: verdicts.needsChief,
+      computedAt: verdicts.computedAt,
+    })
+    .from(entries)
+    .innerJoin(cars, eq(cars.id, entries.carId))
+    .innerJoin(users, eq(users.id, entries.driverId))
+    .leftJoin(coDriver, eq(coDriver.id, entries.coDriverId))
+    .leftJoin(
+      verdicts,
+      and(eq(verdicts.eventId, entries.eventId), eq(verdicts.entryId, entries.id)),
+    )
+    .where(and(eq(entries.eventId, eventId), eq(entries.status, "entered")))
+    .orderBy(asc(entries.carNumber));
+  return rows.map((row) => ({
+    ...row,
+    status: row.status ?? "waiting",
+    needsChief: row.needsChief ?? false,
+  }));
+}
+
+export type EventEntryRow = Awaited<ReturnType<typeof listEventEntries>>[number];

@@ -1,0 +1,54 @@
+import "server-only";
+import { and, asc, desc, eq, or } from "drizzle-orm";
+import { getDb } from "../client";
+import { cars, entries, events, verdicts } from "../schema";
+
+/** A person's cars, and every entry they drive, co-drive or own, newest event first. */
+export async function listGarage({ userId }: { userId: string }) {
+  const db = getDb();
+  const [carRows, entryRows] = await Promise.all([
+    db
+      .select({
+        id: cars.id,
+        make: cars.make,
+        model: cars.model,
+        year: cars.year,
+        colour: cars.colour,
+        notes: cars.notes,
+      })
+      .from(cars)
+      .where(eq(cars.ownerId, userId))
+      .orderBy(asc(cars.make), asc(cars.model)),
+    db
+      .select({
+        entryId: entries.id,
+        eventId: events.id,
+        eventName: events.name,
+        eventDate: events.eventDate,
+        carNumber: entries.carNumber,
+        declaredClass: entries.declaredClass,
+        make: cars.make,
+        model: cars.model,
+        status: verdicts.status,
+        finalClass: verdicts.finalClass,
+        reason: verdicts.reason,
+      })
+      .from(entries)
+      .innerJoin(cars, eq(cars.id, entries.carId))
+      .innerJoin(events, eq(events.id, entries.eventId))
+      .leftJoin(
+        verdicts,
+        and(eq(verdicts.eventId, entries.eventId), eq(verdicts.entryId, entries.id)),
+      )
+      .where(
+        or(eq(entries.driverId, userId), eq(entries.coDriverId, userId), eq(cars.ownerId, userId)),
+      )
+      .orderBy(desc(events.eventDate), asc(entries.carNumber)),
+  ]);
+  return {
+    cars: carRows.map((c) => ({ ...c, notes: c.notes ?? "" })),
+    entries: entryRows.map((e) => ({ ...e, status: e.status ?? "waiting" })),
+  };
+}
+
+export type Garage = Awaited<ReturnType<typeof listGarage>>;

@@ -1,0 +1,18 @@
+import "server-only";
+import { getDb } from "../client";
+import { mailLog } from "../schema";
+
+/** Append one line to the mail log. */
+export async function logMail(row: {
+  eventId?: string | null;
+  toAddress: string;
+  subject: string;
+  kind: string;
+  messageId?: string | null;
+  status: "sent" | "failed";
+  error?: string | null;
+}): Promise<void> {
+  await getDb()
+    .insert(mailLog)
+    .values({ ...row, error: row.error?.slice(0, 500) ?? null, createdAt: new Date() });
+}

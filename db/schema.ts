@@ -1,0 +1,450 @@
+/**
+ * Plumbline's data model (Drizzle, MariaDB). Tables are plural snake_case; keys camelCase.
+ * Every table that grows during a season carries `eventId` and an index that starts with it,
+ * so a championship is many small event partitions. Most rows are append-only: only rows that
+ * really change carry `updatedAt`.
+ */
+import {
+  bigint,
+  boolean,
+  char,
+  date,
+  datetime,
+  decimal,
+  index,
+  int,
+  json,
+  mysqlEnum,
+  mysqlTable,
+  primaryKey,
+  smallint,
+  text,
+  timestamp,
+  uniqueIndex,
+  varchar,
+} from "drizzle-orm/mysql-core";
+import { v7 as uuidv7 } from "uuid";
+import { eventRoles } from "../lib/auth/roles";
+
+const uuid = (name: string) => varchar(name, { length: 36 });
+const createdAt = () => datetime("created_at", { mode: "date", fsp: 3 }).notNull();
+const updatedAt = () => datetime("updated_at", { mode: "date", fsp: 3 }).notNull();
+
+// ── Auth.js (next-auth v5) tables, column shapes as @auth/drizzle-adapter expects ─────────────
+export const users = mysqlTable("users", {
+  id: varchar("id", { length: 255 })
+    .primaryKey()
+    .$defaultFn(() => uuidv7()),
+  name: varchar("name", { length: 255 }),
+  email: varchar("email", { length: 255 }).notNull().unique("users_email_unique"),
+  emailVerified: timestamp("email_verified", { mode: "date", fsp: 3 }),
+  image: varchar("image", { length: 255 }),
+  passwordHash: varchar("password_hash", { length: 100 }),
+  createdAt: datetime("created_at", { mode: "date", fsp: 3 }).$defaultFn(() => new Date()),
+});
+
+export const accounts = mysqlTable(
+  "accounts",
+  {
+    userId: varchar("user_id", { length: 255 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    type: varchar("type", { length: 255 })
+      .$type<"email" | "oauth" | "oidc" | "webauthn">()
+      .notNull(),
+    provider: varchar("provider", { length: 255 }).notNull(),
+    providerAccountId: varchar("provider_account_id", { length: 255 }).notNull(),
+    refresh_token: varchar("refresh_token", { length: 255 }),
+    access_token: varchar("access_token", { length: 255 }),
+    expires_at: int("expires_at"),
+    token_type: varchar("token_type", { length: 255 }),
+    scope: varchar("scope", { length: 255 }),
+    id_token: varchar("id_token", { length: 2048 }),
+    session_state: varchar("session_state", { length: 255 }),
+  },
+  (t) => [primaryKey({ columns: [t.provider, t.providerAccountId], name: "accounts_pk" })],
+);
+
+export const sessions = mysqlTable("sessions", {
+  sessionToken: varchar("session_token", { length: 255 }).primaryKey(),
+  userId: varchar("user_id", { length: 255 })
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  expires: timestamp("expires", { mode: "date" }).notNull(),
+});
+
+export const verificationTokens = mysqlTable(
+  "verification_tokens",
+  {
+    identifier: varchar("identifier", { length: 255 }).notNull(),
+    token: varchar("token", { length: 255 }).notNull(),
+    expires: timestamp("expires", { mode: "date" }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.identifier, t.token], name: "verification_tokens_pk" })],
+);
+
+// ── Clubs, venues, rule sets ───────────────────────────────────────────────────────────────
+export const clubs = mysqlTable("clubs", {
+  id: uuid("id").primaryKey(),
+  name: varchar("name", { length: 120 }).notNull(),
+  slug: varchar("slug", { length: 60 }).notNull().unique("clubs_slug_unique"),
+  createdAt: createdAt(),
+});
+
+export const venues = mysqlTable("venues", {
+  id: uuid("id").primaryKey(),
+  clubId: uuid("club_id")
+    .notNull()
+    .references(() => clubs.id),
+  name: varchar("name", { length: 120 }).notNull(),
+  trackLengthM: int("track_length_m").notNull(),
+  timeZone: varchar("time_zone", { length: 64 }).notNull(),
+  /** Cars allowed on track at once: an explicit number, or track length × density. */
+  maxCarsOnTrack: smallint("max_cars_on_track"),
+  carsPerKm: decimal("cars_per_km", { precision: 4, scale: 1 }),
+  createdAt: createdAt(),
+});
+
+export const ruleSets = mysqlTable("rule_sets", {
+  id: uuid("id").primaryKey(),
+  clubId: uuid("club_id")
+    .notNull()
+    .references(() => clubs.id),
+  name: varchar("name", { length: 120 }).notNull(),
+  createdAt: createdAt(),
+});
+
+/** One version of a rule set. `body` is validated by lib/scrutineer's rule-set schema on save;
+ *  a version is locked (never changed again) once an event pins it. */
+export const ruleSetVersions = mysqlTable(
+  "rule_set_versions",
+  {
+    id: uuid("id").primaryKey(),
+    ruleSetId: uuid("rule_set_id")
+      .notNull()
+      .references(() => ruleSets.id),
+    version: int("version").notNull(),
+    body: json("body").notNull(),
+    notes: varchar("notes", { length: 500 }),
+    createdBy: varchar("created_by", { length: 255 }).references(() => users.id),
+    createdAt: createdAt(),
+    lockedAt: datetime("locked_at", { mode: "date", fsp: 3 }),
+  },
+  (t) => [uniqueIndex("rule_set_versions_set_version_unique").on(t.ruleSetId, t.version)],
+);
+
+// ── Events and who runs them ───────────────────────────────────────────────────────────────
+export const events = mysqlTable("events", {
+  id: uuid("id").primaryKey(),
+  clubId: uuid("club_id")
+    .notNull()
+    .references(() => clubs.id),
+  venueId: uuid("venue_id")
+    .notNull()
+    .references(() => venues.id),
+  name: varchar("name", { length: 160 }).notNull(),
+  slug: varchar("slug", { length: 80 }).notNull().unique("events_slug_unique"),
+  /** The event's calendar date at the venue. */
+  eventDate: date("event_date", { mode: "string" }).notNull(),
+  timeZone: varchar("time_zone", { length: 64 }).notNull(),
+  unitSystem: mysqlEnum("unit_system", ["mm", "in"]).notNull(),
+  status: mysqlEnum("status", ["draft", "entries-open", "entries-closed", "running", "finished"])
+    .notNull()
+    .default("draft"),
+  ruleSetVersionId: uuid("rule_set_version_id")
+    .notNull()
+    .references(() => ruleSetVersions.id),
+  entryFeeMinor: int("entry_fee_minor").notNull(),
+  currency: char("currency", { length: 3 }).notNull(),
+  capacity: smallint("capacity").notNull(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const eventOfficials = mysqlTable(
+  "event_officials",
+  {
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    userId: varchar("user_id", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    role: mysqlEnum("role", eventRoles).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.eventId, t.userId, t.role], name: "event_officials_pk" }),
+    index("event_officials_user_idx").on(t.userId),
+  ],
+);
+
+/** The event's Ed25519 key pair for signing passes. The private key never leaves the server. */
+export const eventPassKeys = mysqlTable(
+  "event_pass_keys",
+  {
+    kid: varchar("kid", { length: 64 }).primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    publicKeyX: varchar("public_key_x", { length: 64 }).notNull(),
+    privateKeyPkcs8: text("private_key_pkcs8").notNull(),
+    createdAt: createdAt(),
+    retiredAt: datetime("retired_at", { mode: "date", fsp: 3 }),
+  },
+  (t) => [index("event_pass_keys_event_idx").on(t.eventId)],
+);
+
+// ── Garage and entries ─────────────────────────────────────────────────────────────────────
+export const cars = mysqlTable(
+  "cars",
+  {
+    id: uuid("id").primaryKey(),
+    ownerId: varchar("owner_id", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    make: varchar("make", { length: 60 }).notNull(),
+    model: varchar("model", { length: 80 }).notNull(),
+    year: smallint("year").notNull(),
+    colour: varchar("colour", { length: 40 }).notNull(),
+    notes: varchar("notes", { length: 500 }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("cars_owner_idx").on(t.ownerId)],
+);
+
+export const entries = mysqlTable(
+  "entries",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    carId: uuid("car_id")
+      .notNull()
+      .references(() => cars.id),
+    carNumber: smallint("car_number").notNull(),
+    declaredClass: varchar("declared_class", { length: 40 }).notNull(),
+    driverId: varchar("driver_id", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    coDriverId: varchar("co_driver_id", { length: 255 }).references(() => users.id),
+    lapTimeEstimateMs: int("lap_time_estimate_ms"),
+    /** Entrant declarations (dyno sheet, tyres, modification points), shaped by lib/scrutineer. */
+    declarations: json("declarations").notNull(),
+    status: mysqlEnum("status", ["entered", "withdrawn"]).notNull().default("entered"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex("entries_event_car_number_unique").on(t.eventId, t.carNumber),
+    index("entries_event_driver_idx").on(t.eventId, t.driverId),
+    index("entries_driver_idx").on(t.driverId),
+    index("entries_co_driver_idx").on(t.coDriverId),
+  ],
+);
+
+export const passes = mysqlTable(
+  "passes",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    kid: varchar("kid", { length: 64 }).notNull(),
+    token: text("token").notNull(),
+    issuedAt: datetime("issued_at", { mode: "date", fsp: 3 }).notNull(),
+    expiresAt: datetime("expires_at", { mode: "date", fsp: 3 }).notNull(),
+    revokedAt: datetime("revoked_at", { mode: "date", fsp: 3 }),
+    revokedReason: varchar("revoked_reason", { length: 300 }),
+    revokedBy: varchar("revoked_by", { length: 255 }).references(() => users.id),
+  },
+  (t) => [index("passes_event_entry_idx").on(t.eventId, t.entryId)],
+);
+
+// ── The tech line: immutable records and derived verdicts ──────────────────────────────────
+export const recordKinds = ["reading", "checklist", "photo", "note", "void", "override"] as const;
+
+/** Immutable: a reading, checklist answer, photo, note, void or override. The id is made on the
+ *  device (UUID v7), so storing is idempotent. Never updated; corrections are new records. */
+export const records = mysqlTable(
+  "records",
+  {
+    id: char("id", { length: 36 }).primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    kind: mysqlEnum("kind", recordKinds).notNull(),
+    payload: json("payload").notNull(),
+    officialId: varchar("official_id", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    deviceId: varchar("device_id", { length: 64 }).notNull(),
+    deviceTime: datetime("device_time", { mode: "date", fsp: 3 }).notNull(),
+    receivedAt: datetime("received_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (t) => [
+    index("records_event_entry_idx").on(t.eventId, t.entryId),
+    index("records_event_received_idx").on(t.eventId, t.receivedAt),
+  ],
+);
+
+export const verdictStatuses = ["waiting", "cleared", "moved-up", "re-measure", "held"] as const;
+
+/** The stored result of evaluating an entry; always re-derivable from its records and the
+ *  event's pinned rule-set version. */
+export const verdicts = mysqlTable(
+  "verdicts",
+  {
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    status: mysqlEnum("status", verdictStatuses).notNull(),
+    finalClass: varchar("final_class", { length: 40 }),
+    needsChief: boolean("needs_chief").notNull().default(false),
+    reason: varchar("reason", { length: 500 }).notNull(),
+    ruleSetVersionId: uuid("rule_set_version_id")
+      .notNull()
+      .references(() => ruleSetVersions.id),
+    result: json("result").notNull(),
+    recordCount: int("record_count").notNull(),
+    computedAt: datetime("computed_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.eventId, t.entryId], name: "verdicts_pk" }),
+    index("verdicts_event_status_idx").on(t.eventId, t.status),
+  ],
+);
+
+export const runGroupPublications = mysqlTable(
+  "run_group_publications",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    version: int("version").notNull(),
+    body: json("body").notNull(),
+    publishedBy: varchar("published_by", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    publishedAt: datetime("published_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("run_group_publications_event_version_unique").on(t.eventId, t.version)],
+);
+
+// ── Money, waivers, uploads ────────────────────────────────────────────────────────────────
+export const payments = mysqlTable(
+  "payments",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    provider: varchar("provider", { length: 30 }).notNull(),
+    providerRef: varchar("provider_ref", { length: 120 }).notNull(),
+    amountMinor: int("amount_minor").notNull(),
+    currency: char("currency", { length: 3 }).notNull(),
+    status: mysqlEnum("status", ["pending", "paid", "failed", "refunded"]).notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("payments_event_entry_idx").on(t.eventId, t.entryId),
+    uniqueIndex("payments_provider_ref_unique").on(t.provider, t.providerRef),
+  ],
+);
+
+export const waivers = mysqlTable(
+  "waivers",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    signerId: varchar("signer_id", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    signedName: varchar("signed_name", { length: 160 }).notNull(),
+    signedAt: datetime("signed_at", { mode: "date", fsp: 3 }).notNull(),
+    isMinor: boolean("is_minor").notNull().default(false),
+    guardianName: varchar("guardian_name", { length: 160 }),
+    guardianSignedAt: datetime("guardian_signed_at", { mode: "date", fsp: 3 }),
+    textVersion: varchar("text_version", { length: 40 }).notNull(),
+  },
+  (t) => [index("waivers_event_entry_idx").on(t.eventId, t.entryId)],
+);
+
+export const uploads = mysqlTable(
+  "uploads",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id").references(() => entries.id),
+    recordId: char("record_id", { length: 36 }),
+    kind: mysqlEnum("kind", ["photo", "dyno-sheet", "other"]).notNull(),
+    bucket: varchar("bucket", { length: 63 }).notNull(),
+    objectKey: varchar("object_key", { length: 300 }).notNull(),
+    contentType: varchar("content_type", { length: 100 }).notNull(),
+    byteSize: int("byte_size").notNull(),
+    sha256: char("sha256", { length: 64 }),
+    uploadedBy: varchar("uploaded_by", { length: 255 })
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("uploads_event_entry_idx").on(t.eventId, t.entryId),
+    uniqueIndex("uploads_object_unique").on(t.bucket, t.objectKey),
+  ],
+);
+
+// ── Logs ───────────────────────────────────────────────────────────────────────────────────
+export const mailLog = mysqlTable(
+  "mail_log",
+  {
+    id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
+    eventId: uuid("event_id").references(() => events.id),
+    toAddress: varchar("to_address", { length: 255 }).notNull(),
+    subject: varchar("subject", { length: 255 }).notNull(),
+    kind: varchar("kind", { length: 40 }).notNull(),
+    messageId: varchar("message_id", { length: 255 }),
+    status: mysqlEnum("status", ["sent", "failed"]).notNull(),
+    error: varchar("error", { length: 500 }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("mail_log_event_idx").on(t.eventId, t.createdAt)],
+);
+
+export const auditLog = mysqlTable(
+  "audit_log",
+  {
+    id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
+    eventId: uuid("event_id").references(() => events.id),
+    actorId: varchar("actor_id", { length: 255 }).references(() => users.id),
+    action: varchar("action", { length: 64 }).notNull(),
+    subjectType: varchar("subject_type", { length: 40 }).notNull(),
+    subjectId: varchar("subject_id", { length: 64 }).notNull(),
+    detail: json("detail"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("audit_log_event_idx").on(t.eventId, t.createdAt)],
+);

@@ -1,0 +1,272 @@
+// The demo event day (invented): a club, its venue, a rule set, one event with about 40 entries in
+// four classes, an official for every role, and entrants — one car shared by two drivers.
+import { v7 as uuidv7 } from "uuid";
+import type { EntryDeclarationsInput } from "../../lib/scrutineer/entry-declarations-schema";
+import type { Db } from "../client";
+import {
+  cars,
+  clubs,
+  entries,
+  eventOfficials,
+  events,
+  payments,
+  ruleSets,
+  ruleSetVersions,
+  users,
+  venues,
+  waivers,
+} from "../schema";
+import { DEMO_PASSWORD_HASH } from "./demo-password";
+import {
+  demoCars,
+  demoColours,
+  demoDomain,
+  demoEntrants,
+  demoFirstNames,
+  demoLastNames,
+  demoOfficials,
+} from "./demo-people";
+import { demoRuleSet } from "./demo-rule-set";
+import { createPrng } from "./prng";
+
+/** Classes of the demo ladder and how many entries each gets (40 in all). */
+const classPlan = [
+  { classId: "kestrel", count: 12 },
+  { classId: "merlin", count: 12 },
+  { classId: "harrier", count: 10 },
+  { classId: "peregrine", count: 6 },
+] as const;
+
+export type DemoSeed = { eventId: string; entryIds: string[]; userIds: Record<string, string> };
+
+/** The Saturday on or after `today` (YYYY-MM-DD), as YYYY-MM-DD. */
+export function nextSaturday(today: string): string {
+  const date = new Date(`${today}T12:00:00Z`);
+  date.setUTCDate(date.getUTCDate() + ((6 - date.getUTCDay() + 7) % 7));
+  return date.toISOString().slice(0, 10);
+}
+
+/** Insert the whole demo in one transaction. `today` decides the event date (next Saturday). */
+export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSeed> {
+  const rnd = createPrng(20270417);
+  const now = new Date();
+  const eventDate = nextSaturday(opts.today);
+  const clubId = uuidv7();
+  const venueId = uuidv7();
+  const ruleSetId = uuidv7();
+  const ruleSetVersionId = uuidv7();
+  const eventId = uuidv7();
+  const userIds: Record<string, string> = {};
+
+  const userRows: (typeof users.$inferInsert)[] = [];
+  const addUser = (key: string, name: string) => {
+    const id = uuidv7();
+    userIds[key] = id;
+    userRows.push({
+      id,
+      name,
+      email: `${key}@${demoDomain}`,
+      emailVerified: now,
+      passwordHash: DEMO_PASSWORD_HASH,
+      createdAt: now,
+    });
+    return id;
+  };
+  for (const o of demoOfficials) addUser(o.key, o.name);
+  for (const e of demoEntrants) addUser(e.key, e.name);
+
+  const carRows: (typeof cars.$inferInsert)[] = [];
+  const entryRows: (typeof entries.$inferInsert)[] = [];
+  const usedNumbers = new Set<number>();
+  const carNumber = () => {
+    for (;;) {
+      const n = rnd.int(2, 99);
+      if (!usedNumbers.has(n)) {
+        usedNumbers.add(n);
+        return n;
+      }
+    }
+  };
+
+  let driverIndex = 0;
+  for (const plan of classPlan) {
+    for (let i = 0; i < plan.count; i += 1) {
+      const first = driverIndex === 0;
+      const driverKey = first ? "entrant" : `driver${String(driverIndex).padStart(2, "0")}`;
+      const driverId =
+        userIds[driverKey] ??
+        addUser(driverKey, `${rnd.pick(demoFirstNames)} ${rnd.pick(demoLastNames)}`);
+      driverIndex += 1;
+      const model = rnd.pick(demoCars);
+      const carId = uuidv7();
+      carRows.push({
+        id: carId,
+        ownerId: driverId,
+        make: model.make,
+        model: model.model,
+        year: model.year,
+        colour: rnd.pick(demoColours),
+        createdAt: now,
+        updatedAt: now,
+      });
+      entryRows.push({
+        id: uuidv7(),
+        eventId,
+        carId,
+        carNumber: first ? 7 : carNumber(),
+        declaredClass: plan.classId,
+        driverId,
+        coDriverId: first ? (userIds.codriver ?? null) : null,
+        lapTimeEstimateMs: lapEstimateMs(plan.classId, rnd.next()),
+        declarations: demoDeclarations(plan.classId, rnd.next(), eventDate),
+        status: "entered",
+        createdAt: now,
+        updatedAt: now,
+      });
+      if (first) usedNumbers.add(7);
+    }
+  }
+
+  await db.transaction(async (tx) => {
+    await tx.insert(users).values(userRows);
+    await tx.insert(clubs).values({
+      id: clubId,
+      name: "Brackenmoor & District Car Club",
+      slug: "brackenmoor",
+      createdAt: now,
+    });
+    await tx.insert(venues).values({
+      id: venueId,
+      clubId,
+      name: "Cinder Vale Circuit",
+      trackLengthM: 2860,
+      timeZone: "Europe/London",
+      carsPerKm: "5.0",
+      createdAt: now,
+    });
+    await tx
+      .insert(ruleSets)
+      .values({ id: ruleSetId, clubId, name: "Brackenmoor time-attack classes", createdAt: now });
+    await tx.insert(ruleSetVersions).values({
+      id: ruleSetVersionId,
+      ruleSetId,
+      version: 1,
+      body: demoRuleSet,
+      notes: "Demo ladder: Kestrel, Merlin, Harrier, Peregrine",
+      createdBy: userIds.organizer ?? null,
+      createdAt: now,
+      lockedAt: now,
+    });
+    await tx.insert(events).values({
+      id: eventId,
+      clubId,
+      venueId,
+      name: "Cinder Vale Time Attack",
+      slug: `cinder-vale-${eventDate}`,
+      eventDate,
+      timeZone: "Europe/London",
+      unitSystem: "mm",
+      status: "running",
+      ruleSetVersionId,
+      entryFeeMinor: 9500,
+      currency: "GBP",
+      capacity: 48,
+      createdAt: now,
+      updatedAt: now,
+    });
+    await tx.insert(eventOfficials).values(
+      demoOfficials.map((o) => ({
+        eventId,
+        userId: userIds[o.key] ?? "",
+        role: o.role,
+        createdAt: now,
+      })),
+    );
+    await tx.insert(cars).values(carRows);
+    await tx.insert(entries).values(entryRows);
+    await tx.insert(waivers).values(demoWaivers(entryRows, eventId, now));
+    await tx.insert(payments).values(demoPayments(entryRows, eventId, now));
+  });
+
+  return { eventId, entryIds: entryRows.map((e) => e.id as string), userIds };
+}
+
+function lapEstimateMs(classId: string, r: number): number {
+  const base: Record<string, number> = {
+    kestrel: 118_000,
+    merlin: 112_000,
+    harrier: 106_000,
+    peregrine: 101_000,
+  };
+  return Math.round((base[classId] ?? 115_000) + r * 6000);
+}
+
+function demoDeclarations(classId: string, r: number, eventDate: string): EntryDeclarationsInput {
+  const aero = classId !== "kestrel" || r > 0.7;
+  const year = Number(eventDate.slice(0, 4));
+  return {
+    aero: { wing: aero, splitter: classId !== "kestrel", diffuser: classId === "peregrine" },
+    dynoSheet: {
+      power: {
+        value: Math.round(
+          140 + r * 60 + (classId === "peregrine" ? 120 : classId === "harrier" ? 60 : 0),
+        ),
+        unit: "hp",
+      },
+      measuredAt: "wheel",
+      correction: "sae-j1349",
+      ambient: {
+        pressure: { value: 1008 + Math.round(r * 12), unit: "mbar" },
+        temperature: { value: 14 + Math.round(r * 10), unit: "C" },
+      },
+      date: `${year - 1}-0${1 + Math.floor(r * 8)}-15`,
+    },
+    tyres:
+      classId === "peregrine" && r > 0.4
+        ? { kind: "no-grade" }
+        : { kind: "graded", treadwear: r > 0.5 ? 200 : 180 },
+    modificationPoints: Math.round(r * 10),
+    driverWeightKg: 70 + Math.round(r * 25),
+    ballastKg: 0,
+  };
+}
+
+function demoWaivers(
+  rows: (typeof entries.$inferInsert)[],
+  eventId: string,
+  now: Date,
+): (typeof waivers.$inferInsert)[] {
+  // Most drivers have signed; the last two have not (so the sign-on desk has work). Entry 3's
+  // driver is a minor whose guardian has not co-signed yet.
+  return rows.slice(0, rows.length - 2).map((row, i) => ({
+    id: uuidv7(),
+    eventId,
+    entryId: row.id as string,
+    signerId: row.driverId,
+    signedName: "signed online",
+    signedAt: now,
+    isMinor: i === 3,
+    guardianName: null,
+    guardianSignedAt: null,
+    textVersion: "2027-1",
+  }));
+}
+
+function demoPayments(
+  rows: (typeof entries.$inferInsert)[],
+  eventId: string,
+  now: Date,
+): (typeof payments.$inferInsert)[] {
+  return rows.slice(0, rows.length - 3).map((row, i) => ({
+    id: uuidv7(),
+    eventId,
+    entryId: row.id as string,
+    provider: "demo",
+    providerRef: `demo_${String(i + 1).padStart(4, "0")}`,
+    amountMinor: 9500,
+    currency: "GBP",
+    status: "paid" as const,
+    createdAt: now,
+    updatedAt: now,
+  }));
+}

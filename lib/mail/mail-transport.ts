@@ -1,0 +1,19 @@
+import "server-only";
+import nodemailer from "nodemailer";
+import { env } from "../env";
+
+// SMTP through nodemailer. In the demo and the tests this is the local SMTP fake on 127.0.0.1;
+// in live mode point SMTP_HOST/SMTP_PORT at the club's mail provider.
+const globalForMail = globalThis as unknown as { plumblineMail?: nodemailer.Transporter };
+
+export function getMailTransport(): nodemailer.Transporter {
+  globalForMail.plumblineMail ??= nodemailer.createTransport({
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    secure: false,
+    ignoreTLS: env.PLUMBLINE_MODE === "demo",
+    connectionTimeout: 5000,
+    greetingTimeout: 5000,
+  });
+  return globalForMail.plumblineMail;
+}

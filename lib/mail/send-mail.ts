@@ -1,0 +1,31 @@
+import "server-only";
+import { logMail } from "../../db/queries/log-mail";
+import { env } from "../env";
+import { getMailTransport } from "./mail-transport";
+
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  kind: string;
+  eventId?: string | null;
+};
+
+/** Send one e-mail and record it in the mail log, whether it went or not. */
+export async function sendMail(mail: OutgoingMail): Promise<void> {
+  try {
+    const info = await getMailTransport().sendMail({
+      from: env.MAIL_FROM,
+      to: mail.to,
+      subject: mail.subject,
+      text: mail.text,
+      html: mail.html,
+    });
+    await logMail({ ...mail, toAddress: mail.to, messageId: info.messageId, status: "sent" });
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    await logMail({ ...mail, toAddress: mail.to, status: "failed", error: message });
+    throw error;
+  }
+}

@@ -1,0 +1,35 @@
+#!/usr/bin/env bash
+# npm start: everything a fresh Debian machine with Node 20 needs, then the app on 127.0.0.1:3000.
+# Installs what is missing (npm packages, MariaDB), starts MariaDB and the local service fakes on
+# loopback, applies migrations, seeds the demo when the database is empty, builds when the code
+# changed, and serves. Ctrl-C stops the app and the fakes; MariaDB keeps running for next time
+# (`npm run db:down` stops it).
+set -euo pipefail
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+
+require_node
+ensure_node_modules
+bash scripts/mariadb.sh start
+
+export PORT="${PORT:-3000}"
+export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
+export AUTH_URL="$APP_URL"
+
+node_modules/.bin/tsx scripts/migrate.ts
+node_modules/.bin/tsx scripts/seed.ts
+
+if build_is_stale .next; then
+  say "building the app (next build --webpack, about a minute)"
+  node_modules/.bin/next build --webpack >.data/build.log 2>&1 || { tail -40 .data/build.log; exit 1; }
+else
+  say "build is up to date"
+fi
+
+node_modules/.bin/tsx scripts/services.ts &
+SERVICES_PID=$!
+trap 'kill "$SERVICES_PID" 2>/dev/null || true' EXIT INT TERM
+wait_port 2525 && wait_port 2580 && wait_port 4568 || { say "local service fakes did not start"; exit 1; }
+
+say "Plumbline on $APP_URL — demo accounts are in README.md (Ctrl-C to stop)"
+node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"

@@ -1,0 +1,47 @@
+#!/usr/bin/env bash
+# npm test: the whole suite on a fresh Debian machine with Node 20 — lint, types, unit tests,
+# a production build, integration tests against the real MariaDB and the built app, and
+# Playwright in Debian's Chromium. Installs what is missing first. Everything on 127.0.0.1.
+set -euo pipefail
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+started=$SECONDS
+
+require_node
+ensure_node_modules
+ensure_debian chromium chromium
+ensure_debian ffmpeg ffmpeg
+bash scripts/mariadb.sh start
+export TZ=UTC
+export NEXT_DIST_DIR=.next-test
+mkdir -p .data
+
+say "lint and types"
+node_modules/.bin/biome check .
+node_modules/.bin/tsc --noEmit
+
+say "unit tests"
+node_modules/.bin/vitest run --project unit
+
+if build_is_stale "$NEXT_DIST_DIR"; then
+  say "building the app for the tests (next build --webpack)"
+  node_modules/.bin/next build --webpack >.data/test-build.log 2>&1 || { tail -60 .data/test-build.log; exit 1; }
+else
+  say "test build is up to date"
+fi
+
+say "integration tests (MariaDB + the built app)"
+node_modules/.bin/vitest run --project integration
+
+say "browser tests (Playwright, Debian Chromium)"
+E2E_DB="$(node_modules/.bin/tsx scripts/e2e-database.ts create)"
+trap 'node_modules/.bin/tsx scripts/e2e-database.ts drop "$E2E_DB" || true' EXIT
+export PLUMBLINE_E2E_APP_PORT="${PLUMBLINE_E2E_APP_PORT:-3300}"
+export DATABASE_URL="$E2E_DB"
+export APP_URL="http://127.0.0.1:$PLUMBLINE_E2E_APP_PORT" AUTH_URL="http://127.0.0.1:$PLUMBLINE_E2E_APP_PORT"
+export SMTP_PORT=2725 MAILBOX_URL=http://127.0.0.1:2780 S3_ENDPOINT=http://127.0.0.1:4768
+export PLUMBLINE_SERVICES_DIR="$ROOT/.data/test-services/e2e"
+rm -rf "$PLUMBLINE_SERVICES_DIR"
+node_modules/.bin/playwright test
+
+say "all suites passed in $((SECONDS - started)) s"
