@@ -1,0 +1,37 @@
+import { daysBetweenDates } from "./days-between-dates";
+import type { EquipmentLabel } from "./equipment-label-schema";
+import { equipmentValidThrough } from "./equipment-valid-through";
+import type { SafetyStandard } from "./safety-rules-schema";
+
+/** Validity of one item on the event date. */
+export type EquipmentValidity = {
+  status: "valid" | "expires-soon" | "expired" | "unreadable";
+  /** Last valid day, ISO; null for no expiry or an unreadable label. */
+  validThrough: string | null;
+  /** Days from the event date to the last valid day (0 = the event day is the last). */
+  daysLeft: number | null;
+  /** Why the label could not be read, when unreadable. */
+  problem: string | null;
+};
+
+/**
+ * Whether certified equipment is valid on the event date (the venue's calendar date):
+ * expired after its last valid day; "expires-soon" when the last valid day is no more than
+ * `warningDays` after the event date; otherwise valid.
+ * @param eventDate ISO "YYYY-MM-DD" in the venue's time zone
+ */
+export function checkEquipmentValidity(args: {
+  standard: SafetyStandard;
+  label: EquipmentLabel;
+  eventDate: string;
+  warningDays: number;
+}): EquipmentValidity {
+  const through = equipmentValidThrough(args.label, args.standard.policy);
+  if (!through.ok)
+    return { status: "unreadable", validThrough: null, daysLeft: null, problem: through.reason };
+  if (through.validThrough === null)
+    return { status: "valid", validThrough: null, daysLeft: null, problem: null };
+  const daysLeft = daysBetweenDates(args.eventDate, through.validThrough);
+  const status = daysLeft < 0 ? "expired" : daysLeft <= args.warningDays ? "expires-soon" : "valid";
+  return { status, validThrough: through.validThrough, daysLeft, problem: null };
+}

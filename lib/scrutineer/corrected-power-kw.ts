@@ -1,0 +1,84 @@
+import { addYearsToDate } from "./add-years-to-date";
+import { convertPower } from "./convert-power";
+import { convertPressure } from "./convert-pressure";
+import { convertTemperature } from "./convert-temperature";
+import { dynoCorrectionFactor } from "./dyno-correction-factor";
+import { CORRECTION_NAMES } from "./dyno-correction-standards";
+import type { DynoSheet } from "./entry-declarations-schema";
+import type { RuleSet } from "./rule-set-schema";
+
+type PowerRule = NonNullable<RuleSet["powerToWeight"]>;
+
+/** The power figure the class compares, or why it cannot be had yet. */
+export type CorrectedPower =
+  | { ok: true; powerKw: number; correctionFactor: number | null; measuredAt: "wheel" | "crank" }
+  | { ok: false; missing: string[]; reason: string };
+
+/**
+ * Brings a declared dyno figure to the basis the rule set asks for: the required correction
+ * standard (re-correcting through observed power with the sheet's pressure and temperature when
+ * the sheet used another), and wheel or crank power (only when the rule gives a conversion factor).
+ * A sheet older than the rule's validity on the event date is not accepted.
+ * @param eventDate ISO date of the event (venue-local)
+ */
+export function correctedPowerKw(
+  sheet: DynoSheet | null,
+  rule: PowerRule,
+  eventDate: string,
+): CorrectedPower {
+  if (sheet === null) {
+    return { ok: false, missing: ["dyno sheet"], reason: "waiting for the dyno sheet" };
+  }
+  if (
+    rule.dynoSheetValidYears !== null &&
+    addYearsToDate(sheet.date, rule.dynoSheetValidYears) < eventDate
+  ) {
+    return {
+      ok: false,
+      missing: ["a current dyno sheet"],
+      reason: `the dyno sheet dated ${sheet.date} is older than ${rule.dynoSheetValidYears} years; a current sheet is needed`,
+    };
+  }
+  let powerKw = convertPower(sheet.power.value, sheet.power.unit, "kW");
+  let factor: number | null = null;
+  if (sheet.correction !== rule.correction) {
+    if (sheet.ambient === null) {
+      return {
+        ok: false,
+        missing: ["dyno sheet pressure and temperature"],
+        reason: `the dyno sheet is ${CORRECTION_NAMES[sheet.correction]} and gives no pressure and temperature to bring it to ${CORRECTION_NAMES[rule.correction]}`,
+      };
+    }
+    const { pressure, vapourPressure, temperature } = sheet.ambient;
+    const dryAirPressureKpa =
+      convertPressure(pressure.value, pressure.unit, "kPa") -
+      (vapourPressure === undefined
+        ? 0
+        : convertPressure(vapourPressure.value, vapourPressure.unit, "kPa"));
+    const conditions = {
+      dryAirPressureKpa,
+      temperatureC: convertTemperature(temperature.value, temperature.unit, "C"),
+    };
+    const observed =
+      sheet.correction === "uncorrected"
+        ? powerKw
+        : powerKw / dynoCorrectionFactor(sheet.correction, conditions);
+    factor =
+      rule.correction === "uncorrected" ? 1 : dynoCorrectionFactor(rule.correction, conditions);
+    powerKw = observed * factor;
+  }
+  if (sheet.measuredAt !== rule.powerMeasuredAt) {
+    if (rule.crankToWheelFactor === null) {
+      return {
+        ok: false,
+        missing: [`${rule.powerMeasuredAt} power figure`],
+        reason: `the dyno sheet gives ${sheet.measuredAt} power; this rule set needs ${rule.powerMeasuredAt} power`,
+      };
+    }
+    powerKw =
+      sheet.measuredAt === "crank"
+        ? powerKw * rule.crankToWheelFactor
+        : powerKw / rule.crankToWheelFactor;
+  }
+  return { ok: true, powerKw, correctionFactor: factor, measuredAt: rule.powerMeasuredAt };
+}

@@ -1,0 +1,52 @@
+import { conformanceProbability } from "./conformance-probability";
+import type { DecisionRule } from "./rule-set-schema";
+
+/** Outcome of judging one measured value against one limit. */
+export type LimitDecision = {
+  outcome: "pass" | "fail" | "inconclusive";
+  /** Distance inside the limit (positive) or beyond it (negative), in the value's unit. */
+  marginToLimit: number;
+  /** U = k·u. */
+  expandedUncertainty: number;
+  conformanceProbability: number;
+  /** Where the decision changes: the limit itself (simple), or the limit moved in by U (guarded). */
+  acceptanceLimit: number;
+};
+
+/**
+ * Judges a value against one limit with the rule set's decision rule (JCGM 106:2012 §8).
+ * - simple acceptance: pass when within the limit (reading ≤ limit for a maximum), else fail.
+ * - guarded acceptance: pass when value + U ≤ limit, fail when value − U > limit, otherwise
+ *   inconclusive (re-measure, or the chief scrutineer decides). Mirrored for a minimum.
+ * @param value best estimate (mean), in the limit's unit
+ * @param standardUncertainty combined standard uncertainty u_c of `value`
+ */
+export function decideLimit(args: {
+  value: number;
+  standardUncertainty: number;
+  limit: number;
+  side: "max" | "min";
+  decisionRule: DecisionRule;
+}): LimitDecision {
+  const { value, standardUncertainty, limit, side, decisionRule } = args;
+  const margin = side === "max" ? limit - value : value - limit;
+  const expanded = decisionRule.k * standardUncertainty;
+  const probability = conformanceProbability({ value, standardUncertainty, limit, side });
+  if (decisionRule.kind === "simple") {
+    return {
+      outcome: margin >= 0 ? "pass" : "fail",
+      marginToLimit: margin,
+      expandedUncertainty: expanded,
+      conformanceProbability: probability,
+      acceptanceLimit: limit,
+    };
+  }
+  const outcome = margin >= expanded ? "pass" : margin < -expanded ? "fail" : "inconclusive";
+  return {
+    outcome,
+    marginToLimit: margin,
+    expandedUncertainty: expanded,
+    conformanceProbability: probability,
+    acceptanceLimit: side === "max" ? limit - expanded : limit + expanded,
+  };
+}

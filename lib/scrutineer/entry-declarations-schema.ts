@@ -1,0 +1,60 @@
+import { z } from "zod";
+import { CORRECTION_STANDARDS } from "./rule-set-schema";
+
+/** A dyno sheet as the entrant uploads it. */
+export const dynoSheetSchema = z.object({
+  power: z.object({ value: z.number().positive().finite(), unit: z.enum(["hp", "PS", "kW"]) }),
+  measuredAt: z.enum(["wheel", "crank"]),
+  /** The standard the printed figure is corrected to; "uncorrected" for observed power. */
+  correction: z.enum(CORRECTION_STANDARDS),
+  /** Ambient conditions printed on the sheet; needed to convert between standards. */
+  ambient: z
+    .object({
+      pressure: z.object({
+        value: z.number().positive(),
+        unit: z.enum(["kPa", "hPa", "mbar", "inHg"]),
+      }),
+      /** Vapour pressure, if printed; without it the air is taken as dry. */
+      vapourPressure: z
+        .object({ value: z.number().min(0), unit: z.enum(["kPa", "hPa", "mbar", "inHg"]) })
+        .optional(),
+      temperature: z.object({ value: z.number().gt(-60).lt(70), unit: z.enum(["C", "F"]) }),
+    })
+    .nullable()
+    .default(null),
+  date: z.iso.date(),
+});
+/** See {@link dynoSheetSchema}. */
+export type DynoSheet = z.infer<typeof dynoSheetSchema>;
+
+/** What the entrant declares for an entry; the scrutineer's readings check the measurable parts. */
+export const entryDeclarationsSchema = z.object({
+  aero: z
+    .object({
+      wing: z.boolean().default(false),
+      splitter: z.boolean().default(false),
+      diffuser: z.boolean().default(false),
+    })
+    .default({ wing: false, splitter: false, diffuser: false }),
+  dynoSheet: dynoSheetSchema.nullable().default(null),
+  /** Tyres fitted: a UTQG treadwear grade, or none (race tyres). Absent = not declared yet. */
+  tyres: z
+    .discriminatedUnion("kind", [
+      z.object({ kind: z.literal("graded"), treadwear: z.number().int().min(0).max(2000) }),
+      z.object({ kind: z.literal("no-grade") }),
+    ])
+    .nullable()
+    .default(null),
+  modificationPoints: z.number().min(0).nullable().default(null),
+  driverWeightKg: z.number().positive().max(250).nullable().default(null),
+  /** Ballast fitted when weighed. */
+  ballastKg: z.number().min(0).default(0),
+  engine: z
+    .object({ displacementCc: z.number().positive(), forcedInduction: z.boolean() })
+    .nullable()
+    .default(null),
+});
+/** Declarations after defaults. */
+export type EntryDeclarations = z.output<typeof entryDeclarationsSchema>;
+/** Declarations as sent, before defaults. */
+export type EntryDeclarationsInput = z.input<typeof entryDeclarationsSchema>;

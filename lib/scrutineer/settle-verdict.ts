@@ -1,0 +1,186 @@
+import type { ClassRules } from "./class-rules-schema";
+import { dimensionLabel } from "./dimension-labels";
+import type { DisplayUnits } from "./display-units";
+import { formatMass } from "./format-mass";
+import { formatQuantity } from "./format-quantity";
+import { RULE_TITLES } from "./rule-titles";
+import type {
+  DimensionSummary,
+  RuleResult,
+  SafetyItemResult,
+  VerdictStatus,
+} from "./verdict-schema";
+import type { LadderWalk } from "./walk-class-ladder";
+
+/** The computed outcome before any override. */
+export type SettledVerdict = {
+  status: VerdictStatus;
+  classId: string | null;
+  fallbackClassId: string | null;
+  reason: string;
+};
+
+/** Lower-cases the first letter for use mid-sentence, unless it starts an acronym. */
+function midSentence(text: string): string {
+  const [a, b] = [text[0], text[1]];
+  if (a === undefined || (b !== undefined && b === b.toUpperCase() && b !== b.toLowerCase()))
+    return text;
+  return a.toLowerCase() + text.slice(1);
+}
+
+function andMore(count: number): string {
+  return count > 0 ? ` (and ${count} more)` : "";
+}
+
+function formatDimensionValue(d: DimensionSummary, value: number, display: DisplayUnits): string {
+  if (d.dimension === "cornerWeightKg") return formatMass(value, display.mass);
+  if (d.dimension === "noiseDbA") return formatQuantity(value, "dB(A)", display);
+  return formatQuantity(value, "mm", display);
+}
+
+/**
+ * Decides the verdict from everything checked, most serious first — held (a safety failure,
+ * the noise limit, a stop-kind failure, or over every class), then re-measure (a doubt under
+ * guarded acceptance, or readings that disagree), then waiting, then cleared or moved up — and
+ * words the one-line reason.
+ */
+export function settleVerdict(args: {
+  walk: LadderWalk;
+  classes: ReadonlyArray<ClassRules>;
+  eventRules: ReadonlyArray<RuleResult>;
+  safety: ReadonlyArray<SafetyItemResult>;
+  dimensions: ReadonlyArray<DimensionSummary>;
+  missing: ReadonlyArray<string>;
+  display: DisplayUnits;
+  expiryWarningDays: number;
+}): SettledVerdict {
+  const { walk, classes, eventRules, safety, display } = args;
+  const declared = walk.checks[0];
+  const nameAt = (index: number) => classes[index]?.name ?? "?";
+  const idAt = (index: number) => classes[index]?.id ?? null;
+  const endIndex = walk.end.kind === "exhausted" ? null : walk.end.classIndex;
+  const endCheck = endIndex === null ? undefined : walk.checks[endIndex - walk.declaredIndex];
+
+  const held: string[] = [
+    ...safety.filter((s) => s.outcome === "fail").map((s) => s.reason),
+    ...eventRules.filter((r) => r.outcome === "fail").map((r) => r.reason),
+  ];
+  if (walk.end.kind === "stopped") {
+    held.push(
+      ...(endCheck?.rules
+        .filter((r) => r.outcome === "fail" && r.onFail === "stop")
+        .map((r) => r.reason) ?? []),
+    );
+  }
+  if (held.length > 0) {
+    return {
+      status: "held",
+      classId: null,
+      fallbackClassId: null,
+      reason: `Held — fix and re-present: ${midSentence(held[0] ?? "")}${andMore(held.length - 1)}.`,
+    };
+  }
+  if (walk.end.kind === "exhausted") {
+    const top = walk.checks[walk.checks.length - 1];
+    const fails = top?.rules.filter((r) => r.outcome === "fail") ?? [];
+    return {
+      status: "held",
+      classId: null,
+      fallbackClassId: null,
+      reason: `Held — over every class's limits; in ${top?.className ?? "the top class"}: ${midSentence(fails[0]?.reason ?? "over")}${andMore(fails.length - 1)}.`,
+    };
+  }
+
+  const disagreeing = args.dimensions.filter((d) => d.disagreements.length > 0);
+  const doubts = [
+    ...eventRules.filter((r) => r.outcome === "inconclusive"),
+    ...(walk.end.kind === "unsure"
+      ? (endCheck?.rules.filter((r) => r.outcome === "inconclusive") ?? [])
+      : []),
+  ];
+  const firstDisagreeing = disagreeing[0];
+  const firstPair = firstDisagreeing?.disagreements[0];
+  if (firstDisagreeing !== undefined && firstPair !== undefined) {
+    const count = disagreeing.reduce((n, d) => n + d.disagreements.length, 0);
+    const label = dimensionLabel(firstDisagreeing.dimension, firstDisagreeing.corner);
+    return {
+      status: "re-measure",
+      classId: idAt(walk.end.classIndex),
+      fallbackClassId: walk.fallbackClassIndex === null ? null : idAt(walk.fallbackClassIndex),
+      reason: `Re-measure — two readings of the ${label} differ by ${formatDimensionValue(firstDisagreeing, firstPair.difference, display)}, more than the ${formatDimensionValue(firstDisagreeing, firstPair.allowedDifference, display)} their uncertainties allow${andMore(count - 1)}; re-measure or ask the chief scrutineer.`,
+    };
+  }
+  const firstDoubt = doubts[0];
+  if (firstDoubt !== undefined) {
+    const atTop = walk.end.classIndex >= classes.length - 1;
+    const ifOver =
+      firstDoubt.classId === null
+        ? "if over, held"
+        : walk.fallbackClassIndex !== null
+          ? `if over, moves up to ${nameAt(walk.fallbackClassIndex)}`
+          : atTop
+            ? "if over, held"
+            : "if over, moves up";
+    return {
+      status: "re-measure",
+      classId: idAt(walk.end.classIndex),
+      fallbackClassId: walk.fallbackClassIndex === null ? null : idAt(walk.fallbackClassIndex),
+      reason: `Re-measure — ${midSentence(firstDoubt.reason)}${andMore(doubts.length - 1)}; ${ifOver}; or ask the chief scrutineer.`,
+    };
+  }
+
+  const waiting =
+    walk.end.kind === "incomplete" ||
+    eventRules.some((r) => r.outcome === "waiting") ||
+    safety.some((s) => s.outcome === "waiting");
+  if (waiting) {
+    const shown = args.missing.slice(0, 5).map(midSentence).join(", ");
+    const moved =
+      walk.end.classIndex > walk.declaredIndex
+        ? `over ${declared?.className ?? "the declared class"}'s limits, ${nameAt(walk.end.classIndex)} still to settle; `
+        : "";
+    return {
+      status: "waiting",
+      classId: idAt(walk.end.classIndex),
+      fallbackClassId: null,
+      reason: `Waiting — ${moved}still to do: ${shown === "" ? "the remaining checks" : shown}${andMore(args.missing.length - 5)}.`,
+    };
+  }
+
+  const expiring = safety
+    .filter((s) => s.equipment?.status === "expires-soon")
+    .map((s) => midSentence(s.label));
+  const expiryNote =
+    expiring.length === 0
+      ? ""
+      : `; ${expiring.join(", ")} ${expiring.length === 1 ? "expires" : "expire"} within ${args.expiryWarningDays} days`;
+  if (walk.end.classIndex > walk.declaredIndex) {
+    const fails = declared?.rules.filter((r) => r.outcome === "fail") ?? [];
+    return {
+      status: "moved-up",
+      classId: idAt(walk.end.classIndex),
+      fallbackClassId: null,
+      reason: `Moves up from ${declared?.className ?? "?"} to ${nameAt(walk.end.classIndex)} — ${midSentence(fails[0]?.reason ?? "over the class's limits")}${andMore(fails.length - 1)}${expiryNote}.`,
+    };
+  }
+  const measured = (endCheck?.rules ?? []).filter(
+    (r) =>
+      r.conformanceProbability !== null &&
+      r.reading !== null &&
+      r.marginText !== null &&
+      r.decisionRule !== "declared",
+  );
+  const closest = [...measured].sort(
+    (a, b) =>
+      (a.conformanceProbability ?? 1) - (b.conformanceProbability ?? 1) ||
+      (a.marginToLimit ?? 0) - (b.marginToLimit ?? 0),
+  )[0];
+  const closestNote =
+    closest === undefined ? "" : `; closest: ${RULE_TITLES[closest.ruleId]}, ${closest.marginText}`;
+  return {
+    status: "cleared",
+    classId: idAt(walk.end.classIndex),
+    fallbackClassId: null,
+    reason: `Cleared in ${nameAt(walk.end.classIndex)} — all checks passed${closestNote}${expiryNote}.`,
+  };
+}
