@@ -13,11 +13,15 @@ export type LimitDecision = {
   acceptanceLimit: number;
 };
 
+/** Relative size below which a difference is binary floating-point noise, not measurement. */
+const NOISE = 1e-12;
+
 /**
  * Judges a value against one limit with the rule set's decision rule (JCGM 106:2012 §8).
  * - simple acceptance: pass when within the limit (reading ≤ limit for a maximum), else fail.
  * - guarded acceptance: pass when value + U ≤ limit, fail when value − U > limit, otherwise
  *   inconclusive (re-measure, or the chief scrutineer decides). Mirrored for a minimum.
+ * Differences below 1e-12 of the quantities' size count as equal (unit conversion noise).
  * @param value best estimate (mean), in the limit's unit
  * @param standardUncertainty combined standard uncertainty u_c of `value`
  */
@@ -29,8 +33,12 @@ export function decideLimit(args: {
   decisionRule: DecisionRule;
 }): LimitDecision {
   const { value, standardUncertainty, limit, side, decisionRule } = args;
-  const margin = side === "max" ? limit - value : value - limit;
   const expanded = decisionRule.k * standardUncertainty;
+  // 14 in typed as a limit is 355.59999999999997 mm; a reading typed as 355.6 mm must not fail it.
+  const scale = NOISE * Math.max(1, Math.abs(limit), Math.abs(value), expanded);
+  const raw = side === "max" ? limit - value : value - limit;
+  const margin = Math.abs(raw) <= scale ? 0 : raw;
+  const atLeast = (a: number, b: number) => a >= b || Math.abs(a - b) <= scale;
   const probability = conformanceProbability({ value, standardUncertainty, limit, side });
   if (decisionRule.kind === "simple") {
     return {
@@ -41,7 +49,11 @@ export function decideLimit(args: {
       acceptanceLimit: limit,
     };
   }
-  const outcome = margin >= expanded ? "pass" : margin < -expanded ? "fail" : "inconclusive";
+  const outcome = atLeast(margin, expanded)
+    ? "pass"
+    : !atLeast(margin, -expanded)
+      ? "fail"
+      : "inconclusive";
   return {
     outcome,
     marginToLimit: margin,

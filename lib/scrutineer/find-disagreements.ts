@@ -32,7 +32,11 @@ export function findDisagreements(
       if (b === undefined) continue;
       const difference = Math.abs(a.value - b.value);
       const allowed = k * Math.sqrt(a.standardUncertainty ** 2 + b.standardUncertainty ** 2);
-      if (difference > allowed) {
+      // Differences within binary noise of the allowance (1e-12 relative) are not disagreements.
+      if (
+        difference > allowed &&
+        difference - allowed > 1e-12 * Math.max(1, Math.abs(a.value), Math.abs(b.value))
+      ) {
         found.push({
           firstRecordId: a.recordId,
           secondRecordId: b.recordId,

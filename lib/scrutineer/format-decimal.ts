@@ -5,9 +5,15 @@
 export function formatDecimal(value: number, maxDecimals: number): string {
   if (!Number.isFinite(value)) return String(value);
   const factor = 10 ** maxDecimals;
-  // toPrecision(12) first, so binary noise (6.349999999999994) rounds as the decimal it stands for.
-  const rounded = Math.round(Number((Math.abs(value) * factor).toPrecision(12))) / factor;
-  const fixed = rounded.toFixed(maxDecimals);
-  const text = fixed.includes(".") ? fixed.replace(/0+$/, "").replace(/\.$/, "") : fixed;
+  const scaled = Math.abs(value) * factor;
+  // The 1e-12 nudge makes binary noise (6.349999999999994) round as the decimal it stands for.
+  const rounded = Math.round(scaled + scaled * 1e-12) / factor;
+  let text = rounded.toFixed(maxDecimals);
+  if (maxDecimals > 0) {
+    let end = text.length;
+    while (text.charCodeAt(end - 1) === 48) end -= 1; // "0"
+    if (text.charCodeAt(end - 1) === 46) end -= 1; // "."
+    text = text.slice(0, end);
+  }
   return value < 0 && rounded !== 0 ? `-${text}` : text;
 }

@@ -49,6 +49,11 @@ export function resolveRecords(
   }
   const unique: TechRecord[] = [];
   for (const list of copies.values()) {
+    const only = list.length === 1 ? list[0] : undefined;
+    if (only !== undefined) {
+      unique.push(only);
+      continue;
+    }
     const texts = list.map((r) => ({ r, text: stableStringify(r) }));
     texts.sort((a, b) => (a.text < b.text ? -1 : a.text > b.text ? 1 : 0));
     const first = texts[0];

@@ -135,10 +135,13 @@ export function settleVerdict(args: {
     safety.some((s) => s.outcome === "waiting");
   if (waiting) {
     const shown = args.missing.slice(0, 5).map(midSentence).join(", ");
+    const from = declared?.className ?? "the declared class";
     const moved =
-      walk.end.classIndex > walk.declaredIndex
-        ? `over ${declared?.className ?? "the declared class"}'s limits, ${nameAt(walk.end.classIndex)} still to settle; `
-        : "";
+      walk.end.classIndex <= walk.declaredIndex
+        ? ""
+        : walk.end.kind === "fits"
+          ? `would move up from ${from} to ${nameAt(walk.end.classIndex)}; `
+          : `over ${from}'s limits, ${nameAt(walk.end.classIndex)} still to settle; `;
     return {
       status: "waiting",
       classId: idAt(walk.end.classIndex),
