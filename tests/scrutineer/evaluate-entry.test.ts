@@ -1,0 +1,281 @@
+import { describe, expect, it } from "vitest";
+import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
+import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
+import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
+import { VERDICT_NOTICE } from "@/lib/scrutineer/verdict-notice";
+import { verdictSchema } from "@/lib/scrutineer/verdict-schema";
+import {
+  clubRuleSet,
+  input,
+  lengthReading,
+  override,
+  reading,
+  uuid7,
+  voidRecord,
+} from "./fixtures";
+
+const IN = 25.4; // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly
+
+/** A car inside the club rule (5 in behind, 8 in above the roof, span ≤ body). Source: common practice (no source). */
+const inside: TechRecord[] = [
+  lengthReading(1, "wingTopFromGroundMm", 1300 + 7 * IN),
+  lengthReading(2, "roofPeakFromGroundMm", 1300),
+  lengthReading(3, "wingOverhangMm", 4 * IN),
+  lengthReading(4, "wingSpanMm", 64 * IN),
+  lengthReading(5, "bodyWidthMm", 64.5 * IN),
+];
+const run = (records: TechRecord[], ruleSet: RuleSetInput = clubRuleSet()) =>
+  evaluateEntry(input({ ruleSet, records, declaredClassId: "club" }));
+
+describe("evaluateEntry: statuses", () => {
+  it("waits when nothing is measured, naming what is needed", () => {
+    const v = run([]);
+    expect(v.status).toBe("waiting");
+    expect(v.missing).toEqual([
+      "wing top height from the ground",
+      "roof peak height from the ground",
+      "wing overhang",
+      "wing span",
+      "body width",
+    ]);
+    expect(v.reason).toMatch(/^Waiting — still to do: wing top height from the ground, /);
+  });
+
+  it("clears a car inside every limit and says which check was closest", () => {
+    const v = run(inside);
+    expect(v.status).toBe("cleared");
+    expect(v.classId).toBe("club");
+    expect(v.reason).toBe(
+      "Cleared in Club — all checks passed; closest: wing span, 12.7 mm inside.",
+    );
+    expect(v.notice).toBe(VERDICT_NOTICE);
+    expect(v.notice).toMatch(/chief scrutineer has the final say/);
+  });
+
+  it("asks for a re-measure when two readings of one dimension disagree", () => {
+    // Worked here: tape u 1 mm each, k 2 → allowed 2.83 mm; 4 mm apart disagrees (JCGM 100:2008 §5.1.2, §6.2.1)
+    const v = run([...inside, lengthReading(6, "wingOverhangMm", 4 * IN + 4)]);
+    expect(v.status).toBe("re-measure");
+    expect(v.flags).toContain("disagreement");
+    expect(v.reason).toBe(
+      "Re-measure — two readings of the wing overhang differ by 4 mm, more than the 2.8 mm their uncertainties allow; re-measure or ask the chief scrutineer.",
+    );
+    const d = v.dimensions.find((x) => x.dimension === "wingOverhangMm");
+    expect(d?.n).toBe(2);
+    expect(d?.disagreements[0]).toMatchObject({
+      firstRecordId: uuid7(3),
+      secondRecordId: uuid7(6),
+      difference: 4,
+    });
+  });
+
+  it("holds a car over every class's limits", () => {
+    const capped = clubRuleSet();
+    const top = capped.classes[1];
+    if (top === undefined) throw new Error("fixture has two classes");
+    top.aero.wing = {
+      allowed: true,
+      height: { reference: "roof-peak", maxMm: 300 },
+      maxOverhangMm: null,
+      span: null,
+      maxChordMm: null,
+    };
+    const v = run(
+      [
+        lengthReading(1, "wingTopFromGroundMm", 1650),
+        lengthReading(2, "roofPeakFromGroundMm", 1300),
+        ...inside.slice(2),
+      ],
+      capped,
+    );
+    expect(v.status).toBe("held");
+    expect(v.reason).toBe(
+      "Held — over every class's limits; in Open: wing top 350 mm above the roof; limit 300 mm; over by 50 mm.",
+    );
+    expect(v.classChecks.map((c) => c.fit)).toEqual(["over", "over"]);
+    expect(v.classChecks[1]?.rules[0]?.reason).toMatch(
+      /— over every class's limits: held, fix and re-present\.$/,
+    );
+  });
+
+  it("holds, not moves up, when the rule set says a violation stops the car", () => {
+    const rs: RuleSetInput = { ...clubRuleSet(), onViolation: { "wing-overhang": "stop" } };
+    const v = run(
+      [...inside.slice(0, 2), lengthReading(3, "wingOverhangMm", 6 * IN), ...inside.slice(3)],
+      rs,
+    );
+    expect(v.status).toBe("held");
+    expect(v.reason).toBe(
+      "Held — fix and re-present: wing 152.4 mm behind the rearmost bodywork; limit 127 mm behind; over by 25.4 mm.",
+    );
+  });
+
+  it("a tyre without a treadwear grade fails a floor and moves up", () => {
+    // Source: common practice (no source) — a race tyre without UTQG fails any floor
+    const rs = clubRuleSet();
+    const first = rs.classes[0];
+    if (first === undefined) throw new Error("fixture has a first class");
+    first.minTreadwear = 200;
+    const v = evaluateEntry(
+      input({
+        ruleSet: rs,
+        records: inside,
+        declaredClassId: "club",
+        declarations: { aero: { wing: true }, tyres: { kind: "no-grade" } },
+      }),
+    );
+    expect(v.status).toBe("moved-up");
+    expect(v.reason).toBe(
+      "Moves up from Club to Open — tyres carry no treadwear grade; Club needs at least 200.",
+    );
+    const graded = evaluateEntry(
+      input({
+        ruleSet: rs,
+        records: inside,
+        declaredClassId: "club",
+        declarations: { aero: { wing: true }, tyres: { kind: "graded", treadwear: 200 } },
+      }),
+    );
+    expect(graded.status).toBe("cleared");
+  });
+
+  it("holds a car over the event's noise limit", () => {
+    // Source: Motorsport UK NCR 2026 Ch.7 App.8; club noise-test pages — club limits around 105 dB(A)
+    const rs: RuleSetInput = {
+      ...clubRuleSet(),
+      noise: { maxDbA: 105, method: "0.5 m from the outlet at 45°, ¾ of max engine speed" },
+    };
+    const meter = { id: "meter-1", name: "Sound level meter", standardUncertainty: 0.5 };
+    const v = run(
+      [...inside, reading(9, { dimension: "noiseDbA", value: 108, instrument: meter })],
+      rs,
+    );
+    expect(v.status).toBe("held");
+    expect(v.reason).toBe(
+      "Held — fix and re-present: noise 108 dB(A); limit 105 dB(A); over by 3 dB(A).",
+    );
+  });
+
+  it("words every reason in the event's unit", () => {
+    const v = evaluateEntry(
+      input({ ruleSet: clubRuleSet(), records: inside, declaredClassId: "club", length: "in" }),
+    );
+    expect(v.classChecks[0]?.rules.map((r) => r.reason)).toEqual([
+      "Wing top 7 in above the roof; limit 8 in; 1 in inside.",
+      "Wing 4 in behind the rearmost bodywork; limit 5 in behind; 1 in inside.",
+      "Wing span 64 in, end plates counted, on a body 64.5 in wide; limit the body's width; 0.5 in inside.",
+    ]);
+    expect(v.display).toEqual({ length: "in", mass: "lb" });
+  });
+});
+
+describe("evaluateEntry: records", () => {
+  it("a void removes its target; voiding the void restores it", () => {
+    const wrong = lengthReading(6, "wingOverhangMm", 300);
+    expect(run([...inside, wrong]).status).toBe("re-measure");
+    const voided = run([...inside, wrong, voidRecord(7, 6, "read the wrong car")]);
+    expect(voided.status).toBe("cleared");
+    expect(voided.records).toEqual({ total: 7, used: 6, voided: 1, ignored: 0 });
+    expect(
+      run([...inside, wrong, voidRecord(7, 6), voidRecord(8, 7, "the reading was right")]).status,
+    ).toBe("re-measure");
+  });
+
+  it("ignores voids that void each other, and says so", () => {
+    const v = run([...inside, voidRecord(7, 8), voidRecord(8, 7), voidRecord(9, 1)]);
+    expect(v.flags).toContain("void-cycle");
+    expect(v.status).toBe("waiting"); // the wing-top reading (1) is void; the cycle changes nothing
+  });
+
+  it("counts a record sent twice once, and ignores other entries' records", () => {
+    const first = inside[0];
+    if (first === undefined) throw new Error("fixture");
+    const foreign = { ...lengthReading(20, "wingOverhangMm", 900), entryId: "entry-2" };
+    const v = run([...inside, first, foreign]);
+    expect(v.status).toBe("cleared");
+    expect(v.records).toEqual({ total: 7, used: 5, voided: 0, ignored: 2 });
+    expect(v.flags).toEqual(["foreign-record"]);
+  });
+
+  it("sets aside readings taken outside the rule's measurement conditions", () => {
+    const aboard = reading(6, {
+      dimension: "wingOverhangMm",
+      value: 300,
+      instrument: { id: "tape-1", name: "Steel tape", standardUncertainty: 1 },
+      conditions: { driverAboard: true },
+    });
+    const v = run([...inside, aboard]);
+    expect(v.status).toBe("cleared");
+    expect(v.flags).toContain("conditions-mismatch");
+    expect(v.setAside).toEqual([
+      {
+        recordId: uuid7(6),
+        dimension: "wingOverhangMm",
+        corner: null,
+        why: "taken with the driver aboard",
+      },
+    ]);
+  });
+
+  it("the chief scrutineer's override sets the final word, shows who, and keeps the computed verdict", () => {
+    const over = [
+      ...inside.slice(0, 2),
+      lengthReading(3, "wingOverhangMm", 5.25 * IN),
+      ...inside.slice(3),
+    ];
+    const v = run([
+      ...over,
+      override(9, {
+        status: "cleared",
+        classId: "club",
+        reason: "Plumb bob hung off the diffuser; re-read by me at 4.9 in",
+      }),
+    ]);
+    expect(v.status).toBe("cleared");
+    expect(v.classId).toBe("club");
+    expect(v.flags).toContain("overridden");
+    expect(v.override).toMatchObject({
+      officialId: "chief-1",
+      computedStatus: "moved-up",
+      computedClassId: "open",
+    });
+    expect(v.reason).toBe(
+      "Chief scrutineer's decision (chief-1): cleared in Club — Plumb bob hung off the diffuser; re-read by me at 4.9 in.",
+    );
+    const undone = run([
+      ...over,
+      override(9, { status: "cleared", classId: "club", reason: "Plumb bob slipped" }),
+      voidRecord(10, 9, "re-measured"),
+    ]);
+    expect(undone.status).toBe("moved-up");
+    expect(undone.override).toBeNull();
+  });
+
+  it("ignores an override naming no real class, and flags it", () => {
+    const v = run([
+      ...inside,
+      override(9, { status: "moved-up", classId: "club", reason: "moving up as asked by entrant" }),
+    ]);
+    expect(v.status).toBe("cleared");
+    expect(v.flags).toContain("override-invalid");
+  });
+
+  it("returns plain JSON that its own schema accepts, unchanged by a round trip", () => {
+    const v = run([...inside, lengthReading(6, "wingOverhangMm", 4 * IN + 4)]);
+    const json = JSON.parse(JSON.stringify(v));
+    expect(json).toEqual(v);
+    expect(verdictSchema.parse(json)).toEqual(v);
+  });
+
+  it("rejects an entry whose declared class is not in the rule set, at the input schema", () => {
+    const r = evaluateEntryInputSchema.safeParse({
+      ruleSet: clubRuleSet(),
+      entry: { entryId: "e", declaredClassId: "gt1", declarations: {} },
+      records: [],
+      eventDate: "2026-05-16",
+    });
+    expect(r.success).toBe(false);
+    expect(r.error?.issues[0]?.path).toEqual(["entry", "declaredClassId"]);
+  });
+});

@@ -1,0 +1,219 @@
+import fc from "fast-check";
+import jstat from "jstat";
+import { describe, expect, it } from "vitest";
+import { combineReadings } from "@/lib/scrutineer/combine-readings";
+import { conformanceProbability } from "@/lib/scrutineer/conformance-probability";
+import { decideLimit } from "@/lib/scrutineer/decide-limit";
+import { findDisagreements } from "@/lib/scrutineer/find-disagreements";
+import { normalCdf } from "@/lib/scrutineer/normal-cdf";
+
+const tape = (value: number, u = 0.5, instrumentId = "tape") => ({
+  value,
+  standardUncertainty: u,
+  instrumentId,
+});
+
+describe("combineReadings (GUM, JCGM 100:2008)", () => {
+  it("gives the mean and Type A s/√n that a statistics package gives", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 100, max: 2000, noNaN: true }), { minLength: 2, maxLength: 12 }),
+        (values) => {
+          const c = combineReadings(
+            values.map((v) => tape(v)),
+            2,
+          );
+          if (c === null) return false;
+          // Source: JCGM 100:2008 §4.2.1 (mean), §4.2.2 (s with n − 1), §4.2.3 (u_A = s/√n); checked against jstat
+          const s = jstat.stdev(values, true);
+          expect(c.mean).toBeCloseTo(jstat.mean(values), 9);
+          expect(c.experimentalStandardDeviation ?? Number.NaN).toBeCloseTo(s, 9);
+          expect(c.typeAStandardUncertainty).toBeCloseTo(s / Math.sqrt(values.length), 9);
+          return true;
+        },
+      ),
+    );
+  });
+
+  it("combines Type A and Type B in quadrature and expands with k", () => {
+    // Worked here: readings 200, 202, 204 mm → mean 202, s = 2, u_A = 2/√3 = 1.1547;
+    // one tape with u_B = 0.5 → u_c = √(1.1547² + 0.5²) = √(1.3333 + 0.25) = 1.2583; U = 2 × 1.2583 = 2.5166.
+    // Source: JCGM 100:2008 §5.1.2 (combination), §6.2.1 (U = k·u_c)
+    const c = combineReadings([tape(200), tape(202), tape(204)], 2);
+    expect(c?.mean).toBe(202);
+    expect(c?.typeAStandardUncertainty).toBeCloseTo(1.1547005, 6);
+    expect(c?.typeBStandardUncertainty).toBe(0.5);
+    expect(c?.combinedStandardUncertainty).toBeCloseTo(1.2583057, 6);
+    expect(c?.expandedUncertainty).toBeCloseTo(2.5166115, 6);
+  });
+
+  it("has no Type A for a single reading, so u is the instrument's", () => {
+    const c = combineReadings([tape(150, 1.5)], 2);
+    expect(c?.typeAStandardUncertainty).toBe(0);
+    expect(c?.combinedStandardUncertainty).toBe(1.5); // Source: JCGM 100:2008 §4.3 — Type B from the stated uncertainty
+  });
+
+  it("keeps one instrument's Type B whole but averages independent instruments", () => {
+    // Worked here: two readings on one tape (u 1) → u_B = 1 (same tape, fully correlated);
+    // one reading each on two tapes (u 1) → u_B = √((½·1)² + (½·1)²) = 0.7071.
+    // Source: JCGM 100:2008 §5.2 (correlated inputs) and §5.1.2 (uncorrelated)
+    expect(
+      combineReadings([tape(100, 1, "a"), tape(100, 1, "a")], 2)?.typeBStandardUncertainty,
+    ).toBe(1);
+    expect(
+      combineReadings([tape(100, 1, "a"), tape(100, 1, "b")], 2)?.typeBStandardUncertainty,
+    ).toBeCloseTo(Math.SQRT1_2, 12);
+  });
+
+  it("does not depend on the order of the readings", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 0, max: 3000, noNaN: true }), { minLength: 1, maxLength: 8 }),
+        (values) => {
+          const a = combineReadings(
+            values.map((v) => tape(v)),
+            2,
+          );
+          const b = combineReadings(
+            [...values].reverse().map((v) => tape(v)),
+            2,
+          );
+          expect(a).toEqual(b);
+        },
+      ),
+    );
+  });
+});
+
+describe("findDisagreements", () => {
+  it("flags two readings further apart than k·√(u₁² + u₂²)", () => {
+    // Worked here: u 1 mm each, k 2 → allowed 2√2 = 2.83 mm. 3 mm apart disagrees; 2.8 mm does not.
+    // Source: JCGM 100:2008 §5.1.2 (u of a difference) with U = k·u (§6.2.1)
+    const found = findDisagreements(
+      [
+        { recordId: "b", value: 203, standardUncertainty: 1 },
+        { recordId: "a", value: 200, standardUncertainty: 1 },
+      ],
+      2,
+    );
+    expect(found).toHaveLength(1);
+    expect(found[0]?.firstRecordId).toBe("a");
+    expect(found[0]?.allowedDifference).toBeCloseTo(2 * Math.SQRT2, 12);
+    expect(
+      findDisagreements(
+        [
+          { recordId: "a", value: 200, standardUncertainty: 1 },
+          { recordId: "b", value: 202.8, standardUncertainty: 1 },
+        ],
+        2,
+      ),
+    ).toEqual([]);
+  });
+});
+
+describe("normal model, checked against jstat", () => {
+  it("Φ matches jstat's normal CDF across the range", () => {
+    for (let z = -8; z <= 8; z += 0.01) {
+      expect(Math.abs(normalCdf(z) - jstat.normal.cdf(z, 0, 1))).toBeLessThan(1e-12); // Source: jstat 1.9.6 normal.cdf
+    }
+  });
+
+  it("conformance probability for an upper limit is Φ((T_U − y)/u)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 500, noNaN: true }),
+        fc.double({ min: 0.01, max: 20, noNaN: true }),
+        fc.double({ min: 0, max: 500, noNaN: true }),
+        (value, u, limit) => {
+          // Source: JCGM 106:2012 §7 — p_c = Pr(Y ≤ T_U) for Y ~ N(y, u²) (sub-clause from memory); checked against jstat
+          const expected = jstat.normal.cdf(limit, value, u);
+          expect(
+            conformanceProbability({ value, standardUncertainty: u, limit, side: "max" }),
+          ).toBeCloseTo(expected, 10);
+          // Source: JCGM 106:2012 §7 — lower limit: p_c = Pr(Y ≥ T_L) (sub-clause from memory)
+          expect(
+            conformanceProbability({ value, standardUncertainty: u, limit, side: "min" }),
+          ).toBeCloseTo(1 - expected, 10);
+        },
+      ),
+    );
+  });
+});
+
+describe("guarded acceptance zones (JCGM 106:2012 §8)", () => {
+  const guarded = { kind: "guarded", k: 2 } as const;
+
+  it("clears, refuses or doubts exactly where the conformance probability crosses Φ(±k)", () => {
+    const pClear = jstat.normal.cdf(2, 0, 1); // p_c at the acceptance limit T_U − 2u
+    const pOver = jstat.normal.cdf(-2, 0, 1); // p_c at the rejection limit T_U + 2u
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 400, noNaN: true }),
+        fc.double({ min: 0.05, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 400, noNaN: true }),
+        (value, u, limit) => {
+          const z = (limit - value) / u;
+          fc.pre(Math.abs(z - 2) > 1e-6 && Math.abs(z + 2) > 1e-6); // keep clear of the boundaries
+          const d = decideLimit({
+            value,
+            standardUncertainty: u,
+            limit,
+            side: "max",
+            decisionRule: guarded,
+          });
+          const p = jstat.normal.cdf(limit, value, u);
+          // Source: JCGM 106:2012 §8 — guarded acceptance: accept when y + U ≤ T_U, over when y − U > T_U (DOMAIN.md)
+          const expected = p > pClear ? "pass" : p < pOver ? "fail" : "inconclusive";
+          expect(d.outcome).toBe(expected);
+        },
+      ),
+    );
+  });
+
+  it("treats unit-conversion noise as equality, not as over the limit", () => {
+    // Source: NIST SP 811 App. B.8 — 14 in = 355.6 mm exactly, though 14 × 25.4 is 355.59999999999997 in binary
+    const d = decideLimit({
+      value: 355.6,
+      standardUncertainty: 0.5,
+      limit: 14 * 25.4,
+      side: "max",
+      decisionRule: { kind: "simple", k: 2 },
+    });
+    expect(d.outcome).toBe("pass");
+    expect(d.marginToLimit).toBe(0);
+  });
+
+  it("places the acceptance limit at T_U − U", () => {
+    // Source: JCGM 106:2012 §8 — guard band w = U = k·u (DOMAIN.md)
+    const d = decideLimit({
+      value: 190,
+      standardUncertainty: 1.5,
+      limit: 200,
+      side: "max",
+      decisionRule: guarded,
+    });
+    expect(d.acceptanceLimit).toBe(197);
+    expect(d.expandedUncertainty).toBe(3);
+  });
+
+  it("simple acceptance never doubts: reading ≤ limit clears", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 400, noNaN: true }),
+        fc.double({ min: 0, max: 400, noNaN: true }),
+        (value, limit) => {
+          fc.pre(Math.abs(value - limit) > 1e-9); // differences of 1e-12 relative are unit-conversion noise
+          // Source: JCGM 106:2012 §8 — simple acceptance: the acceptance limit is the tolerance limit (DOMAIN.md)
+          const d = decideLimit({
+            value,
+            standardUncertainty: 2,
+            limit,
+            side: "max",
+            decisionRule: { kind: "simple", k: 2 },
+          });
+          expect(d.outcome).toBe(value <= limit ? "pass" : "fail");
+        },
+      ),
+    );
+  });
+});
