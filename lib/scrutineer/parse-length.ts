@@ -72,8 +72,10 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
     .replace(/[″”“]/g, '"')
     .replace(/[′’‘]/g, "'")
     .replace(/⁄/g, "/")
-    .trim();
+    .trim()
+    .replace(/([a-z])\.$/i, "$1"); // "5 in." → "5 in"
   if (t === "") return { ok: false, message: `Enter a length; ${EXAMPLE}.` };
+  if (t.length > 40) return { ok: false, message: `That is too long for one length; ${EXAMPLE}.` };
   if (t.includes(",")) {
     return {
       ok: false,

@@ -1,8 +1,9 @@
 import type { ClassRules } from "./class-rules-schema";
 import { dimensionLabel } from "./dimension-labels";
 import type { DisplayUnits } from "./display-units";
+import { formatDecimal } from "./format-decimal";
+import { DISPLAY_DECIMALS, formatLength } from "./format-length";
 import { formatMass } from "./format-mass";
-import { formatQuantity } from "./format-quantity";
 import { RULE_TITLES } from "./rule-titles";
 import type {
   DimensionSummary,
@@ -32,10 +33,30 @@ function andMore(count: number): string {
   return count > 0 ? ` (and ${count} more)` : "";
 }
 
-function formatDimensionValue(d: DimensionSummary, value: number, display: DisplayUnits): string {
-  if (d.dimension === "cornerWeightKg") return formatMass(value, display.mass);
-  if (d.dimension === "noiseDbA") return formatQuantity(value, "dB(A)", display);
-  return formatQuantity(value, "mm", display);
+function formatDimensionValue(
+  d: DimensionSummary,
+  value: number,
+  display: DisplayUnits,
+  extraDecimals: number,
+): string {
+  if (d.dimension === "cornerWeightKg") return formatMass(value, display.mass, 1 + extraDecimals);
+  if (d.dimension === "noiseDbA") return `${formatDecimal(value, 1 + extraDecimals)} dB(A)`;
+  return formatLength(value, display.length, DISPLAY_DECIMALS[display.length] + extraDecimals);
+}
+
+/** Two quantities worded at the first resolution that tells them apart (at most 3 decimals more). */
+function formatPair(
+  d: DimensionSummary,
+  a: number,
+  b: number,
+  display: DisplayUnits,
+): [string, string] {
+  let pair: [string, string] = ["", ""];
+  for (let extra = 0; extra <= 3; extra += 1) {
+    pair = [formatDimensionValue(d, a, display, extra), formatDimensionValue(d, b, display, extra)];
+    if (pair[0] !== pair[1]) break;
+  }
+  return pair;
 }
 
 /**
@@ -103,11 +124,21 @@ export function settleVerdict(args: {
   if (firstDisagreeing !== undefined && firstPair !== undefined) {
     const count = disagreeing.reduce((n, d) => n + d.disagreements.length, 0);
     const label = dimensionLabel(firstDisagreeing.dimension, firstDisagreeing.corner);
+    const [difference, allowed] = formatPair(
+      firstDisagreeing,
+      firstPair.difference,
+      firstPair.allowedDifference,
+      display,
+    );
+    const asRead =
+      walk.end.kind === "fits" && walk.end.classIndex > walk.declaredIndex
+        ? `; as read, the car moves up to ${nameAt(walk.end.classIndex)}`
+        : "";
     return {
       status: "re-measure",
       classId: idAt(walk.end.classIndex),
       fallbackClassId: walk.fallbackClassIndex === null ? null : idAt(walk.fallbackClassIndex),
-      reason: `Re-measure — two readings of the ${label} differ by ${formatDimensionValue(firstDisagreeing, firstPair.difference, display)}, more than the ${formatDimensionValue(firstDisagreeing, firstPair.allowedDifference, display)} their uncertainties allow${andMore(count - 1)}; re-measure or ask the chief scrutineer.`,
+      reason: `Re-measure — two readings of the ${label} differ by ${difference}, more than the ${allowed} their uncertainties allow${andMore(count - 1)}${asRead}; re-measure or ask the chief scrutineer.`,
     };
   }
   const firstDoubt = doubts[0];
