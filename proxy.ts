@@ -1,5 +1,5 @@
-import NextAuth from "next-auth";
 import type { NextRequest } from "next/server";
+import NextAuth from "next-auth";
 import { authConfig } from "./auth.config";
 
 const { auth } = NextAuth(authConfig);

@@ -14,7 +14,6 @@ bash scripts/mariadb.sh start
 
 export PORT="${PORT:-3000}"
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
-export AUTH_URL="$APP_URL"
 
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx scripts/seed.ts

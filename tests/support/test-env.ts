@@ -22,7 +22,6 @@ export function testServiceEnv(
   return {
     DATABASE_URL: databaseUrl,
     APP_URL: `http://127.0.0.1:${appPort}`,
-    AUTH_URL: `http://127.0.0.1:${appPort}`,
     SMTP_PORT: String(testPorts.smtp),
     MAILBOX_URL: `http://127.0.0.1:${testPorts.mailbox}`,
     S3_ENDPOINT: `http://127.0.0.1:${testPorts.s3}`,
