@@ -144,29 +144,67 @@ describe("guarded acceptance zones (JCGM 106:2012 §8)", () => {
   const guarded = { kind: "guarded", k: 2 } as const;
 
   it("clears, refuses or doubts exactly where the conformance probability crosses Φ(±k)", () => {
-    const pClear = jstat.normal.cdf(2, 0, 1); // p_c at the acceptance limit T_U − 2u
-    const pOver = jstat.normal.cdf(-2, 0, 1); // p_c at the rejection limit T_U + 2u
     fc.assert(
       fc.property(
         fc.double({ min: 0, max: 400, noNaN: true }),
         fc.double({ min: 0.05, max: 10, noNaN: true }),
-        fc.double({ min: 0, max: 400, noNaN: true }),
-        (value, u, limit) => {
+        fc.double({ min: -5, max: 5, noNaN: true }), // where the limit sits, in standard uncertainties
+        fc.constantFrom(1, 1.645, 2, 3),
+        (value, u, zLimit, k) => {
+          const limit = value + zLimit * u;
           const z = (limit - value) / u;
-          fc.pre(Math.abs(z - 2) > 1e-6 && Math.abs(z + 2) > 1e-6); // keep clear of the boundaries
+          fc.pre(Math.abs(z - k) > 1e-6 && Math.abs(z + k) > 1e-6); // keep clear of the boundaries
           const d = decideLimit({
             value,
             standardUncertainty: u,
             limit,
             side: "max",
-            decisionRule: guarded,
+            decisionRule: { kind: "guarded", k },
           });
           const p = jstat.normal.cdf(limit, value, u);
-          // Source: JCGM 106:2012 §8 — guarded acceptance: accept when y + U ≤ T_U, over when y − U > T_U (DOMAIN.md)
-          const expected = p > pClear ? "pass" : p < pOver ? "fail" : "inconclusive";
+          // Source: JCGM 106:2012 §8 — guarded acceptance: accept when y + U ≤ T_U, over when y − U > T_U,
+          // U = k·u (DOMAIN.md); in probability terms p_c ≥ Φ(k) accepts and p_c < Φ(−k) rejects (checked with jstat)
+          const expected =
+            p > jstat.normal.cdf(k, 0, 1)
+              ? "pass"
+              : p < jstat.normal.cdf(-k, 0, 1)
+                ? "fail"
+                : "inconclusive";
+          expect(d.outcome).toBe(expected);
+          expect(d.conformanceProbability).toBeCloseTo(p, 10);
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+
+  it("mirrors the zones for a lower limit (power-to-weight minimum)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1, max: 30, noNaN: true }),
+        fc.double({ min: 0.01, max: 1, noNaN: true }),
+        fc.double({ min: -5, max: 5, noNaN: true }),
+        (value, u, zLimit) => {
+          const limit = value - zLimit * u;
+          fc.pre(Math.abs(Math.abs(zLimit) - 2) > 1e-6);
+          const d = decideLimit({
+            value,
+            standardUncertainty: u,
+            limit,
+            side: "min",
+            decisionRule: guarded,
+          });
+          const p = 1 - jstat.normal.cdf(limit, value, u); // Source: JCGM 106:2012 §7 — Pr(Y ≥ T_L) (sub-clause from memory)
+          const expected =
+            p > jstat.normal.cdf(2, 0, 1)
+              ? "pass"
+              : p < jstat.normal.cdf(-2, 0, 1)
+                ? "fail"
+                : "inconclusive";
           expect(d.outcome).toBe(expected);
         },
       ),
+      { numRuns: 300 },
     );
   });
 
