@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import type { EntryDeclarationsInput } from "@/lib/scrutineer/entry-declarations-schema";
 import type { EvaluateEntryInput } from "@/lib/scrutineer/evaluate-entry-input-schema";
 import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
@@ -135,4 +136,12 @@ export function input(args: {
     eventDate: args.eventDate ?? "2026-05-16",
     display: { length: args.length ?? "mm" },
   });
+}
+
+/**
+ * Decimals spread across [min, max] at a 1e-4 step. fast-check's `double` favours 0, the bounds
+ * and tiny values, which leaves the middle of a range (where limits sit) nearly untested.
+ */
+export function spread(min: number, max: number): fc.Arbitrary<number> {
+  return fc.integer({ min: Math.round(min * 1e4), max: Math.round(max * 1e4) }).map((n) => n / 1e4);
 }

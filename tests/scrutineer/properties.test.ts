@@ -10,6 +10,7 @@ import {
   input,
   lengthReading,
   override,
+  spread,
   uuid7,
   voidRecord,
 } from "./fixtures";
@@ -56,9 +57,9 @@ describe("properties of the verdict", () => {
           fc.constant<RuleSetInput["decisionRule"]>({ kind: "simple" }),
           fc.constant<RuleSetInput["decisionRule"]>({ kind: "guarded", k: 2 }),
         ),
-        fc.array(fc.double({ min: -50, max: 350, noNaN: true }), { minLength: 1, maxLength: 3 }),
-        fc.double({ min: 0, max: 100, noNaN: true }),
-        fc.double({ min: 0.2, max: 5, noNaN: true }),
+        fc.array(spread(-50, 350), { minLength: 1, maxLength: 3 }),
+        spread(0, 100),
+        spread(0.2, 5),
         (limits, decisionRule, overhangsMm, extraMm, u) => {
           const rs = ladder(limits, decisionRule);
           const ids = limits.map((_, i) => `c${i}`);
@@ -89,11 +90,11 @@ describe("properties of the verdict", () => {
     };
     const recordArb = fc
       .record({
-        overhangs: fc.array(fc.double({ min: 90, max: 140, noNaN: true }), {
+        overhangs: fc.array(spread(90, 140), {
           minLength: 1,
           maxLength: 4,
         }),
-        spans: fc.array(fc.double({ min: 1620, max: 1650, noNaN: true }), {
+        spans: fc.array(spread(1620, 1650), {
           minLength: 0,
           maxLength: 3,
         }),

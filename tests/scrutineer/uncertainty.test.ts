@@ -6,6 +6,7 @@ import { conformanceProbability } from "@/lib/scrutineer/conformance-probability
 import { decideLimit } from "@/lib/scrutineer/decide-limit";
 import { findDisagreements } from "@/lib/scrutineer/find-disagreements";
 import { normalCdf } from "@/lib/scrutineer/normal-cdf";
+import { spread } from "./fixtures";
 
 const tape = (value: number, u = 0.5, instrumentId = "tape") => ({
   value,
@@ -16,22 +17,19 @@ const tape = (value: number, u = 0.5, instrumentId = "tape") => ({
 describe("combineReadings (GUM, JCGM 100:2008)", () => {
   it("gives the mean and Type A s/√n that a statistics package gives", () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.double({ min: 100, max: 2000, noNaN: true }), { minLength: 2, maxLength: 12 }),
-        (values) => {
-          const c = combineReadings(
-            values.map((v) => tape(v)),
-            2,
-          );
-          if (c === null) return false;
-          // Source: JCGM 100:2008 §4.2.1 (mean), §4.2.2 (s with n − 1), §4.2.3 (u_A = s/√n); checked against jstat
-          const s = jstat.stdev(values, true);
-          expect(c.mean).toBeCloseTo(jstat.mean(values), 9);
-          expect(c.experimentalStandardDeviation ?? Number.NaN).toBeCloseTo(s, 9);
-          expect(c.typeAStandardUncertainty).toBeCloseTo(s / Math.sqrt(values.length), 9);
-          return true;
-        },
-      ),
+      fc.property(fc.array(spread(100, 2000), { minLength: 2, maxLength: 12 }), (values) => {
+        const c = combineReadings(
+          values.map((v) => tape(v)),
+          2,
+        );
+        if (c === null) return false;
+        // Source: JCGM 100:2008 §4.2.1 (mean), §4.2.2 (s with n − 1), §4.2.3 (u_A = s/√n); checked against jstat
+        const s = jstat.stdev(values, true);
+        expect(c.mean).toBeCloseTo(jstat.mean(values), 9);
+        expect(c.experimentalStandardDeviation ?? Number.NaN).toBeCloseTo(s, 9);
+        expect(c.typeAStandardUncertainty).toBeCloseTo(s / Math.sqrt(values.length), 9);
+        return true;
+      }),
     );
   });
 
@@ -67,20 +65,17 @@ describe("combineReadings (GUM, JCGM 100:2008)", () => {
 
   it("does not depend on the order of the readings", () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.double({ min: 0, max: 3000, noNaN: true }), { minLength: 1, maxLength: 8 }),
-        (values) => {
-          const a = combineReadings(
-            values.map((v) => tape(v)),
-            2,
-          );
-          const b = combineReadings(
-            [...values].reverse().map((v) => tape(v)),
-            2,
-          );
-          expect(a).toEqual(b);
-        },
-      ),
+      fc.property(fc.array(spread(0, 3000), { minLength: 1, maxLength: 8 }), (values) => {
+        const a = combineReadings(
+          values.map((v) => tape(v)),
+          2,
+        );
+        const b = combineReadings(
+          [...values].reverse().map((v) => tape(v)),
+          2,
+        );
+        expect(a).toEqual(b);
+      }),
     );
   });
 });
@@ -120,22 +115,17 @@ describe("normal model, checked against jstat", () => {
 
   it("conformance probability for an upper limit is Φ((T_U − y)/u)", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0, max: 500, noNaN: true }),
-        fc.double({ min: 0.01, max: 20, noNaN: true }),
-        fc.double({ min: 0, max: 500, noNaN: true }),
-        (value, u, limit) => {
-          // Source: JCGM 106:2012 §7 — p_c = Pr(Y ≤ T_U) for Y ~ N(y, u²) (sub-clause from memory); checked against jstat
-          const expected = jstat.normal.cdf(limit, value, u);
-          expect(
-            conformanceProbability({ value, standardUncertainty: u, limit, side: "max" }),
-          ).toBeCloseTo(expected, 10);
-          // Source: JCGM 106:2012 §7 — lower limit: p_c = Pr(Y ≥ T_L) (sub-clause from memory)
-          expect(
-            conformanceProbability({ value, standardUncertainty: u, limit, side: "min" }),
-          ).toBeCloseTo(1 - expected, 10);
-        },
-      ),
+      fc.property(spread(0, 500), spread(0.01, 20), spread(0, 500), (value, u, limit) => {
+        // Source: JCGM 106:2012 §7 — p_c = Pr(Y ≤ T_U) for Y ~ N(y, u²) (sub-clause from memory); checked against jstat
+        const expected = jstat.normal.cdf(limit, value, u);
+        expect(
+          conformanceProbability({ value, standardUncertainty: u, limit, side: "max" }),
+        ).toBeCloseTo(expected, 10);
+        // Source: JCGM 106:2012 §7 — lower limit: p_c = Pr(Y ≥ T_L) (sub-clause from memory)
+        expect(
+          conformanceProbability({ value, standardUncertainty: u, limit, side: "min" }),
+        ).toBeCloseTo(1 - expected, 10);
+      }),
     );
   });
 });
@@ -146,9 +136,9 @@ describe("guarded acceptance zones (JCGM 106:2012 §8)", () => {
   it("clears, refuses or doubts exactly where the conformance probability crosses Φ(±k)", () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 0, max: 400, noNaN: true }),
-        fc.double({ min: 0.05, max: 10, noNaN: true }),
-        fc.double({ min: -5, max: 5, noNaN: true }), // where the limit sits, in standard uncertainties
+        spread(0, 400),
+        spread(0.05, 10),
+        spread(-5, 5), // where the limit sits, in standard uncertainties
         fc.constantFrom(1, 1.645, 2, 3),
         (value, u, zLimit, k) => {
           const limit = value + zLimit * u;
@@ -180,30 +170,25 @@ describe("guarded acceptance zones (JCGM 106:2012 §8)", () => {
 
   it("mirrors the zones for a lower limit (power-to-weight minimum)", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 1, max: 30, noNaN: true }),
-        fc.double({ min: 0.01, max: 1, noNaN: true }),
-        fc.double({ min: -5, max: 5, noNaN: true }),
-        (value, u, zLimit) => {
-          const limit = value - zLimit * u;
-          fc.pre(Math.abs(Math.abs(zLimit) - 2) > 1e-6);
-          const d = decideLimit({
-            value,
-            standardUncertainty: u,
-            limit,
-            side: "min",
-            decisionRule: guarded,
-          });
-          const p = 1 - jstat.normal.cdf(limit, value, u); // Source: JCGM 106:2012 §7 — Pr(Y ≥ T_L) (sub-clause from memory)
-          const expected =
-            p > jstat.normal.cdf(2, 0, 1)
-              ? "pass"
-              : p < jstat.normal.cdf(-2, 0, 1)
-                ? "fail"
-                : "inconclusive";
-          expect(d.outcome).toBe(expected);
-        },
-      ),
+      fc.property(spread(1, 30), spread(0.01, 1), spread(-5, 5), (value, u, zLimit) => {
+        const limit = value - zLimit * u;
+        fc.pre(Math.abs(Math.abs(zLimit) - 2) > 1e-6);
+        const d = decideLimit({
+          value,
+          standardUncertainty: u,
+          limit,
+          side: "min",
+          decisionRule: guarded,
+        });
+        const p = 1 - jstat.normal.cdf(limit, value, u); // Source: JCGM 106:2012 §7 — Pr(Y ≥ T_L) (sub-clause from memory)
+        const expected =
+          p > jstat.normal.cdf(2, 0, 1)
+            ? "pass"
+            : p < jstat.normal.cdf(-2, 0, 1)
+              ? "fail"
+              : "inconclusive";
+        expect(d.outcome).toBe(expected);
+      }),
       { numRuns: 300 },
     );
   });
@@ -236,22 +221,18 @@ describe("guarded acceptance zones (JCGM 106:2012 §8)", () => {
 
   it("simple acceptance never doubts: reading ≤ limit clears", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0, max: 400, noNaN: true }),
-        fc.double({ min: 0, max: 400, noNaN: true }),
-        (value, limit) => {
-          fc.pre(Math.abs(value - limit) > 1e-9); // differences of 1e-12 relative are unit-conversion noise
-          // Source: JCGM 106:2012 §8 — simple acceptance: the acceptance limit is the tolerance limit (DOMAIN.md)
-          const d = decideLimit({
-            value,
-            standardUncertainty: 2,
-            limit,
-            side: "max",
-            decisionRule: { kind: "simple", k: 2 },
-          });
-          expect(d.outcome).toBe(value <= limit ? "pass" : "fail");
-        },
-      ),
+      fc.property(spread(0, 400), spread(0, 400), (value, limit) => {
+        fc.pre(Math.abs(value - limit) > 1e-9); // differences of 1e-12 relative are unit-conversion noise
+        // Source: JCGM 106:2012 §8 — simple acceptance: the acceptance limit is the tolerance limit (DOMAIN.md)
+        const d = decideLimit({
+          value,
+          standardUncertainty: 2,
+          limit,
+          side: "max",
+          decisionRule: { kind: "simple", k: 2 },
+        });
+        expect(d.outcome).toBe(value <= limit ? "pass" : "fail");
+      }),
     );
   });
 });
