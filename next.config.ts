@@ -1,6 +1,17 @@
+import withSerwistInit from "@serwist/next";
 import type { NextConfig } from "next";
 // Validate the environment once, when the app is built and when it starts.
 import { env } from "./lib/env";
+
+// The service worker (app/sw.ts) precaches the app shell; Serwist's plugin needs webpack builds.
+const withSerwist = withSerwistInit({
+  swSrc: "app/sw.ts",
+  swDest: "public/sw.js",
+  // The offline fallback page is a route, so it is not in the build's static files: add it.
+  additionalPrecacheEntries: [{ url: "/~offline", revision: "offline-1" }],
+  reloadOnOnline: false, // a scrutineer mid-entry must never lose the screen to a reload
+  cacheOnNavigation: true,
+});
 
 const nextConfig: NextConfig = {
   distDir: env.NEXT_DIST_DIR,
@@ -12,4 +23,4 @@ const nextConfig: NextConfig = {
   serverExternalPackages: ["mysql2", "bcryptjs"],
 };
 
-export default nextConfig;
+export default withSerwist(nextConfig);

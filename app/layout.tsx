@@ -15,6 +15,8 @@ export const metadata: Metadata = {
   title: { default: "Plumbline", template: "%s · Plumbline" },
   description: "Scrutineering, classing and run groups for club time-attack days.",
   applicationName: "Plumbline",
+  manifest: "/manifest.webmanifest",
+  icons: { icon: "/icons/icon-192.png", apple: "/icons/apple-touch-icon.png" },
 };
 
 export const viewport: Viewport = { themeColor: "#101214", width: "device-width", initialScale: 1 };

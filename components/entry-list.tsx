@@ -4,14 +4,17 @@ import { useMemo, useState } from "react";
 import type { EntryListRow } from "@/lib/entries/to-entry-list-row";
 import { VerdictBadge } from "./verdict-badge";
 
-/** A searchable list of entries, car number first. `hrefFor` gives each row a link. */
+/** A searchable list of entries, car number first; rows link (`hrefTemplate`) or call `onSelect`. */
 export function EntryList({
   rows,
-  hrefBase,
+  hrefTemplate,
+  onSelect,
   emptyText = "No entries yet.",
 }: {
   rows: EntryListRow[];
-  hrefBase?: string;
+  /** Link each row: `:entryId` in the template is replaced by the row's entry id. */
+  hrefTemplate?: string;
+  onSelect?: (entryId: string) => void;
   emptyText?: string;
 }) {
   const [query, setQuery] = useState("");
@@ -65,8 +68,12 @@ export function EntryList({
               data-testid="entry-row"
               data-car-number={row.carNumber}
             >
-              {hrefBase ? (
-                <Link href={`${hrefBase}/${row.entryId}`} className="block min-h-touch">
+              {onSelect ? (
+                <button type="button" className="block min-h-touch w-full text-left" onClick={() => onSelect(row.entryId)}>
+                  {body}
+                </button>
+              ) : hrefTemplate ? (
+                <Link href={hrefTemplate.replace(":entryId", row.entryId)} className="block min-h-touch">
                   {body}
                 </Link>
               ) : (

@@ -266,4 +266,20 @@ if (process.argv[1] !== undefined && import.meta.url === pathToFileURL(process.a
       .map(([s, n]) => `${s} ${n}`)
       .join(", ")}`,
   );
+  // The same rows from MariaDB, read as the server reads them, to put the engine's cost in scale.
+  const { measureDbRead } = await import("./bench-db-read");
+  const inputs = buildBenchEntries({
+    entries: result.entries,
+    readingsPerEntry: result.readingsPerEntry,
+    seed: 20260516,
+    checklistAnswers: true,
+  }).map((r) => evaluateEntryInputSchema.parse(r));
+  const db = await measureDbRead(inputs);
+  const evaluateMs = (result.entries / result.medianEntriesPerSecond) * 1000;
+  console.log(
+    `  MariaDB: ${db.rows.toLocaleString("en-GB")} record rows — one query ${db.allAtOnceMs.toFixed(1)} ms, one query per entry ${db.perEntryMs.toFixed(1)} ms`,
+  );
+  console.log(
+    `  ratio evaluate : read (one query) = ${(evaluateMs / db.allAtOnceMs).toFixed(2)} · evaluate : read (per entry) = ${(evaluateMs / db.perEntryMs).toFixed(2)}`,
+  );
 }

@@ -4,7 +4,8 @@ import path from "node:path";
 /** Start `next start` from the test build on 127.0.0.1 and wait until /api/health answers 200. */
 export async function startAppServer(opts: { port: number; env: Record<string, string> }): Promise<{
   url: string;
-  stop: () => Promise<void>;
+  /** Stop the server: SIGTERM lets it finish; SIGKILL cuts it off mid-request. */
+  stop: (signal?: NodeJS.Signals) => Promise<void>;
 }> {
   const root = path.resolve(import.meta.dirname, "../..");
   const child: ChildProcess = spawn(
@@ -41,11 +42,11 @@ export async function startAppServer(opts: { port: number; env: Record<string, s
   }
   return {
     url,
-    stop: () =>
+    stop: (signal = "SIGTERM") =>
       new Promise<void>((resolve) => {
         if (child.exitCode !== null) return resolve();
         child.once("exit", () => resolve());
-        child.kill("SIGTERM");
+        child.kill(signal);
         setTimeout(() => child.kill("SIGKILL"), 5000).unref();
       }),
   };

@@ -1,0 +1,51 @@
+/// <reference lib="webworker" />
+import { defaultCache } from "@serwist/next/worker";
+import type { PrecacheEntry, SerwistGlobalConfig } from "serwist";
+import { ExpirationPlugin, NetworkFirst, NetworkOnly, Serwist } from "serwist";
+import { drainOutbox } from "@/lib/offline/drain-outbox";
+import { OUTBOX_SYNC_TAG, TECH_PAGES_CACHE } from "@/lib/offline/outbox-constants";
+
+declare global {
+  interface WorkerGlobalScope extends SerwistGlobalConfig {
+    __SW_MANIFEST: (PrecacheEntry | string)[] | undefined;
+  }
+}
+
+declare const self: ServiceWorkerGlobalScope & { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
+
+type SyncEvent = ExtendableEvent & { tag: string };
+
+const serwist = new Serwist({
+  precacheEntries: self.__SW_MANIFEST,
+  skipWaiting: true,
+  clientsClaim: true,
+  navigationPreload: true,
+  runtimeCaching: [
+    {
+      // Pages people open on the pad (tech line, passes, entries): network first, the saved copy
+      // when there is no signal. "Prepare for offline" puts the tech line's pages in this cache.
+      matcher: ({ request, sameOrigin, url }) =>
+        sameOrigin && request.mode === "navigate" && /^\/(tech|entries|p|board)\//.test(url.pathname),
+      handler: new NetworkFirst({
+        cacheName: TECH_PAGES_CACHE,
+        networkTimeoutSeconds: 4,
+        matchOptions: { ignoreSearch: true, ignoreVary: true },
+        plugins: [new ExpirationPlugin({ maxEntries: 80, maxAgeSeconds: 3 * 24 * 3600 })],
+      }),
+    },
+    // Data lives in IndexedDB (lib/offline), never in the HTTP cache.
+    { matcher: ({ sameOrigin, url }) => sameOrigin && url.pathname.startsWith("/api/"), handler: new NetworkOnly() },
+    ...defaultCache,
+  ],
+  fallbacks: {
+    entries: [{ url: "/~offline", matcher: ({ request }) => request.destination === "document" }],
+  },
+});
+
+// Background Sync: the browser wakes us when the phone is back online, even with the tab closed.
+self.addEventListener("sync", (event) => {
+  const sync = event as SyncEvent;
+  if (sync.tag === OUTBOX_SYNC_TAG) sync.waitUntil(drainOutbox({ now: () => Date.now() }).then(() => undefined));
+});
+
+serwist.addEventListeners();

@@ -1,0 +1,21 @@
+"use client";
+import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import { ChecklistItemForm } from "./checklist-item-form";
+import { useTech } from "./tech-context";
+
+/** The safety checklist of the event's rule set. A safety failure holds the car; it never moves it up. */
+export function ChecklistPanel({ entryId, verdict }: { entryId: string; verdict: Verdict | null }) {
+  const { ruleSet } = useTech();
+  return (
+    <section className="space-y-3" aria-labelledby="checklist-title">
+      <h2 id="checklist-title" className="text-2xl font-bold">
+        Safety checklist
+      </h2>
+      <ul className="space-y-2">
+        {ruleSet.safety.checklist.map((item) => (
+          <ChecklistItemForm key={item.id} entryId={entryId} item={item} result={verdict?.safety.find((s) => s.itemId === item.id)} />
+        ))}
+      </ul>
+    </section>
+  );
+}

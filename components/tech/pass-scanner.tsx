@@ -1,0 +1,66 @@
+"use client";
+import { useEffect, useId, useRef, useState } from "react";
+
+type Scanner = { stop: () => Promise<void>; clear: () => void; isScanning: boolean };
+
+/**
+ * The phone camera reading a pass QR, with html5-qrcode loaded only when the camera opens.
+ * Calls `onText` once with what the code says; the caller verifies it.
+ */
+export function PassScanner({ onText, onClose }: { onText: (text: string) => void; onClose: () => void }) {
+  const elementId = `scanner-${useId().replace(/:/g, "")}`;
+  const [problem, setProblem] = useState<string | null>(null);
+  const done = useRef(false);
+
+  useEffect(() => {
+    let scanner: Scanner | null = null;
+    let cancelled = false;
+    (async () => {
+      const { Html5Qrcode, Html5QrcodeSupportedFormats } = await import("html5-qrcode");
+      if (cancelled) return;
+      const instance = new Html5Qrcode(elementId, {
+        verbose: false,
+        formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE],
+      });
+      scanner = instance;
+      try {
+        await instance.start(
+          { facingMode: "environment" },
+          { fps: 10, qrbox: { width: 240, height: 240 } },
+          (text) => {
+            if (done.current) return;
+            done.current = true;
+            onText(text);
+          },
+          () => {},
+        );
+      } catch (error) {
+        setProblem(
+          error instanceof Error && /permission|notallowed/i.test(error.message)
+            ? "The camera is blocked. Allow it in the browser, or type the car number below."
+            : "No camera could be opened. Type the car number or pass code below.",
+        );
+      }
+    })();
+    return () => {
+      cancelled = true;
+      const s = scanner;
+      if (s?.isScanning) void s.stop().then(() => s.clear()).catch(() => {});
+    };
+  }, [elementId, onText]);
+
+  return (
+    <div className="card space-y-3" data-testid="pass-scanner">
+      <p className="text-lg font-semibold">Point the camera at the pass</p>
+      <div id={elementId} className="mx-auto w-full max-w-sm overflow-hidden rounded-lg bg-asphalt-900" />
+      {problem ? (
+        <p className="field-error" role="alert">
+          {problem}
+        </p>
+      ) : null}
+      <button type="button" className="btn-secondary w-full" onClick={onClose}>
+        Close the camera
+      </button>
+    </div>
+  );
+}

@@ -1,0 +1,122 @@
+"use client";
+import { useState } from "react";
+import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
+import { makeRecord } from "@/lib/offline/make-record";
+import { convertMass } from "@/lib/scrutineer/convert-mass";
+import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { parseLength } from "@/lib/scrutineer/parse-length";
+import { type Corner, type Dimension, SIGNED_DIMENSIONS } from "@/lib/scrutineer/record-schema";
+import { defaultInstruments } from "@/lib/tech/default-instruments";
+import { useTech } from "./tech-context";
+
+const unitOf = (d: Dimension) => (d === "cornerWeightKg" ? "kg" : d === "noiseDbA" ? "dB(A)" : "mm");
+
+/**
+ * Record one reading of one dimension: where it is taken (drawing), the value in the event's unit
+ * (or any unit written with it), the instrument, and the conditions the rule set asks for.
+ */
+export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; dimension: Dimension; corner: Corner | null }) {
+  const { ruleSet, pack, official, deviceId, record, canWrite } = useTech();
+  const unitSystem = pack.event.unitSystem;
+  const massUnit = unitSystem === "mm" ? "kg" : "lb";
+  const kind = unitOf(dimension);
+  const instruments = defaultInstruments.filter((i) => i.unit === kind);
+  const [instrumentId, setInstrumentId] = useState<string>(instruments[0]?.id ?? "");
+  const [text, setText] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const [saved, setSaved] = useState<string | null>(null);
+  const conditions = dimension === "cornerWeightKg" ? ruleSet.measurement.weighing : ruleSet.measurement.aero;
+  const [driverAboard, setDriverAboard] = useState(conditions.driverAboard);
+  const [levelPad, setLevelPad] = useState(true);
+  const label = dimensionLabel(dimension, corner);
+
+  const save = async () => {
+    setSaved(null);
+    let value: number;
+    if (kind === "mm") {
+      const parsed = parseLength(text, { defaultUnit: unitSystem, allowNegative: (SIGNED_DIMENSIONS as readonly Dimension[]).includes(dimension) });
+      if (!parsed.ok) return setError(parsed.message);
+      value = parsed.mm;
+    } else {
+      const n = Number(text.replace(",", ".").trim());
+      if (!text.trim() || !Number.isFinite(n) || n < 0) return setError(`Write the ${kind === "kg" ? "weight" : "level"} as a number, e.g. ${kind === "kg" ? "312.5" : "98.5"}`);
+      value = kind === "kg" ? convertMass(n, massUnit, "kg") : n;
+    }
+    const instrument = instruments.find((i) => i.id === instrumentId);
+    if (!instrument) return setError("Pick the instrument you used");
+    setError(null);
+    const base = { value, instrument: { id: instrument.id, name: instrument.name, standardUncertainty: instrument.standardUncertainty }, conditions: { driverAboard, levelPad } };
+    const payload =
+      dimension === "cornerWeightKg"
+        ? { ...base, dimension, corner: corner ?? "lf" }
+        : ({ ...base, dimension } as Parameters<typeof makeRecord<"reading">>[0]["payload"]);
+    await record(makeRecord({ kind: "reading", payload, entryId, officialId: official.id, deviceId, now: new Date() }));
+    setText("");
+    setSaved(`Saved on this phone: ${label} ${text}`);
+  };
+
+  const placeholder = kind === "mm" ? (unitSystem === "mm" ? "e.g. 1380 mm" : 'e.g. 54 3/8"') : kind === "kg" ? `e.g. 312 (${massUnit})` : "e.g. 98.5";
+  return (
+    <div className="space-y-3" data-testid={`reading-entry-${dimension}${corner ? `-${corner}` : ""}`}>
+      <div className="mx-auto max-w-xs">
+        <ReadingDiagram dimension={dimension} {...(corner ? { corner } : {})} />
+      </div>
+      <form
+        className="space-y-3"
+        noValidate
+        onSubmit={(e) => {
+          e.preventDefault();
+          void save();
+        }}
+      >
+        <label className="block">
+          <span className="field-label capitalize">{label}</span>
+          <input
+            className="field-input tabular text-2xl"
+            inputMode={kind === "mm" && unitSystem === "in" ? "text" : "decimal"}
+            placeholder={placeholder}
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+            aria-invalid={error ? true : undefined}
+            data-testid="reading-value"
+            disabled={!canWrite}
+          />
+        </label>
+        {error ? (
+          <p className="field-error" role="alert">
+            {error}
+          </p>
+        ) : null}
+        <label className="block">
+          <span className="field-label">Instrument</span>
+          <select className="field-input" value={instrumentId} onChange={(e) => setInstrumentId(e.target.value)}>
+            {instruments.map((i) => (
+              <option key={i.id} value={i.id}>
+                {i.name} (u = {i.standardUncertainty} {i.unit})
+              </option>
+            ))}
+          </select>
+        </label>
+        <fieldset className="flex flex-wrap gap-4">
+          <legend className="field-label">Measured with</legend>
+          <label className="flex min-h-touch items-center gap-2">
+            <input type="checkbox" className="size-6" checked={levelPad} onChange={(e) => setLevelPad(e.target.checked)} />
+            car on the level pad
+          </label>
+          <label className="flex min-h-touch items-center gap-2">
+            <input type="checkbox" className="size-6" checked={driverAboard} onChange={(e) => setDriverAboard(e.target.checked)} />
+            driver aboard {conditions.driverAboard ? "(the rule says yes)" : "(the rule says no)"}
+          </label>
+        </fieldset>
+        <button type="submit" className="btn-primary w-full" disabled={!canWrite}>
+          Save reading
+        </button>
+        {saved ? (
+          <p className="text-base font-semibold text-cleared" role="status">
+            {saved}
+          </p>
+        ) : null}
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,140 @@
+import { saveServerVerdicts } from "./save-event-pack";
+import { announceChange } from "./announce-change";
+import { backoffDelayMs } from "./backoff-delay";
+import type { PackVerdict } from "./event-pack-schema";
+import { listLocalRecords } from "./list-local-records";
+import { isPending, type LocalRecord } from "./local-record";
+import { OUTBOX_LOCK, SYNC_BATCH_SIZE } from "./outbox-constants";
+import { updateLocalRecord } from "./update-local-record";
+import { uploadPhoto } from "./upload-photo";
+
+export type DrainSummary = { ran: boolean; sent: number; refused: number; waiting: number; signedOut: boolean };
+
+type SyncAnswer = {
+  results: ({ id: string; status: "stored" | "duplicate" } | { id: string | null; status: "refused"; reason: string })[];
+  verdicts: PackVerdict[];
+};
+
+type Options = {
+  now: () => number;
+  random?: () => number;
+  fetchImpl?: typeof fetch;
+  onProgress?: (progress: { sent: number; total: number }) => void;
+};
+
+/**
+ * Send the outbox: photos first, then records in batches, oldest first, one context at a time
+ * (Web Locks). Stored and duplicate records are marked sent; refused ones keep their reason; with
+ * no signal or a server error the batch waits with exponential backoff and jitter; an expired
+ * sign-in keeps the queue until the scrutineer signs in again. Nothing is dropped.
+ */
+export async function drainOutbox(options: Options): Promise<DrainSummary> {
+  const locks = typeof navigator !== "undefined" ? (navigator as Navigator & { locks?: LockManager }).locks : undefined;
+  if (!locks) return run(options);
+  const result = await locks.request(OUTBOX_LOCK, { ifAvailable: true }, (lock) =>
+    lock ? run(options) : Promise.resolve<DrainSummary | null>(null),
+  );
+  return result ?? { ran: false, sent: 0, refused: 0, waiting: 0, signedOut: false };
+}
+
+async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }: Options): Promise<DrainSummary> {
+  const due = (await listLocalRecords()).filter((r) => isPending(r) && r.nextAttemptAt <= now());
+  const summary: DrainSummary = { ran: true, sent: 0, refused: 0, waiting: 0, signedOut: false };
+  const total = due.length;
+  const byEvent = new Map<string, LocalRecord[]>();
+  for (const item of due) byEvent.set(item.eventId, [...(byEvent.get(item.eventId) ?? []), item]);
+
+  const later = async (items: LocalRecord[], error: string) => {
+    for (const item of items) {
+      const attempts = item.attempts + 1;
+      await updateLocalRecord(item.record.id, (r) => ({
+        ...r,
+        state: "queued",
+        attempts,
+        lastError: error,
+        nextAttemptAt: now() + backoffDelayMs(attempts, random()),
+      }));
+    }
+    summary.waiting += items.length;
+  };
+  const holdForSignIn = async (items: LocalRecord[]) => {
+    for (const item of items) {
+      await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "needs-sign-in", lastError: "Sign in again to send." }));
+    }
+    summary.signedOut = true;
+    summary.waiting += items.length;
+  };
+  const refuse = async (item: LocalRecord, reason: string) => {
+    await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "refused", lastError: reason }));
+    summary.refused += 1;
+  };
+
+  for (const [eventId, items] of byEvent) {
+    const ready: LocalRecord[] = [];
+    for (const item of items) {
+      if (item.blob !== "waiting") {
+        ready.push(item);
+        continue;
+      }
+      const outcome = await uploadPhoto(item, fetchImpl);
+      if (outcome === "uploaded") {
+        await updateLocalRecord(item.record.id, (r) => ({ ...r, blob: "uploaded" }));
+        ready.push({ ...item, blob: "uploaded" });
+      } else if (outcome === "signed-out") {
+        await holdForSignIn([item]);
+      } else if (outcome === "retry") {
+        await later([item], "No signal for the photo; will try again.");
+      } else {
+        await refuse(item, outcome.refused);
+      }
+    }
+
+    for (let start = 0; start < ready.length; start += SYNC_BATCH_SIZE) {
+      const batch = ready.slice(start, start + SYNC_BATCH_SIZE);
+      for (const item of batch) await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "sending" }));
+      announceChange({ type: "records", eventId });
+      let response: Response;
+      try {
+        response = await fetchImpl(`/api/events/${eventId}/sync`, {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          credentials: "same-origin",
+          body: JSON.stringify({ deviceId: batch[0]?.record.deviceId ?? "unknown", records: batch.map((b) => b.record) }),
+        });
+      } catch {
+        await later(ready.slice(start), "No signal; will try again.");
+        break;
+      }
+      if (response.status === 401) {
+        await holdForSignIn(ready.slice(start));
+        break;
+      }
+      if (!response.ok && (response.status >= 500 || response.status === 408 || response.status === 429)) {
+        await later(ready.slice(start), `The server answered ${response.status}; will try again.`);
+        break;
+      }
+      const body = (await response.json().catch(() => null)) as (SyncAnswer & { error?: { message?: string } }) | null;
+      if (!response.ok || !body?.results) {
+        const reason = body?.error?.message ?? `The server refused the batch (${response.status}).`;
+        for (const item of batch) await refuse(item, reason);
+        continue;
+      }
+      const byId = new Map(body.results.filter((r) => r.id).map((r) => [r.id as string, r]));
+      for (const item of batch) {
+        const result = byId.get(item.record.id);
+        if (!result) {
+          await later([item], "The server did not answer for this record; will try again.");
+        } else if (result.status === "refused") {
+          await refuse(item, result.reason);
+        } else {
+          await updateLocalRecord(item.record.id, (r) => ({ ...r, state: result.status === "duplicate" ? "duplicate" : "sent", sentAt: now(), lastError: null }));
+          summary.sent += 1;
+        }
+      }
+      await saveServerVerdicts(eventId, body.verdicts ?? []);
+      onProgress?.({ sent: summary.sent, total });
+    }
+    announceChange({ type: "records", eventId });
+  }
+  return summary;
+}

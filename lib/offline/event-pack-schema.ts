@@ -1,0 +1,71 @@
+import { z } from "zod";
+
+/** A record as the server stored it (the phone merges these with its own). */
+export const packRecordSchema = z
+  .object({
+    id: z.string(),
+    entryId: z.string(),
+    kind: z.enum(["reading", "checklist", "photo", "note", "void", "override"]),
+    payload: z.unknown(),
+    officialId: z.string(),
+    deviceId: z.string(),
+    deviceTime: z.string(),
+    receivedAt: z.string(),
+  })
+  .loose();
+
+export const packVerdictSchema = z.object({
+  entryId: z.string(),
+  status: z.enum(["waiting", "cleared", "moved-up", "re-measure", "held"]),
+  classId: z.string().nullable(),
+  reason: z.string(),
+  flags: z.array(z.string()),
+  needsChief: z.boolean(),
+  computedAt: z.string(),
+});
+
+/**
+ * Everything the tech line needs with no signal, fetched once per event day ("Prepare for
+ * offline") and refreshed when there is signal. Stored in IndexedDB by lib/offline.
+ */
+export const eventPackSchema = z.object({
+  packFormat: z.literal(1),
+  etag: z.string(),
+  generatedAt: z.string(),
+  /** Pass to `?since=` to get only records received after this pack. */
+  recordsCursor: z.string().nullable(),
+  /** true when `records` holds only what arrived since the cursor the phone sent. */
+  partial: z.boolean(),
+  event: z.object({
+    id: z.string(),
+    name: z.string(),
+    eventDate: z.string(),
+    timeZone: z.string(),
+    unitSystem: z.enum(["mm", "in"]),
+    venueName: z.string(),
+  }),
+  /** The event's pinned rule set (JSON as stored; the phone validates it with ruleSetSchema). */
+  ruleSet: z.unknown(),
+  ruleSetVersionId: z.string(),
+  entries: z.array(
+    z.object({
+      entryId: z.string(),
+      carNumber: z.number().int(),
+      declaredClassId: z.string(),
+      car: z.string(),
+      colour: z.string(),
+      drivers: z.string(),
+      declarations: z.unknown(),
+    }),
+  ),
+  officials: z.array(z.object({ userId: z.string(), name: z.string() })),
+  /** Public halves of the event's pass-signing keys (Ed25519, base64url `x`). */
+  passKeys: z.array(z.object({ kid: z.string(), x: z.string() })),
+  revokedPassIds: z.array(z.string()),
+  verdicts: z.array(packVerdictSchema),
+  records: z.array(packRecordSchema),
+});
+
+export type EventPack = z.infer<typeof eventPackSchema>;
+export type PackRecord = z.infer<typeof packRecordSchema>;
+export type PackVerdict = z.infer<typeof packVerdictSchema>;

@@ -1,0 +1,12 @@
+import type { Verdict } from "../scrutineer/verdict-schema";
+
+/**
+ * Whether a verdict waits for the chief scrutineer: readings that disagree beyond their combined
+ * uncertainty, an override that no longer fits the rule set, or a checklist answer for an item the
+ * rule set does not have. Code surfaces these; it does not resolve them.
+ */
+export function needsChiefScrutineer(verdict: Pick<Verdict, "flags">): boolean {
+  return verdict.flags.some(
+    (f) => f === "disagreement" || f === "override-invalid" || f === "unknown-checklist-item" || f === "void-cycle",
+  );
+}

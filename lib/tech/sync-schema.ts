@@ -1,0 +1,26 @@
+import { z } from "zod";
+
+/** Most records a phone may send in one batch; the outbox sends smaller batches. */
+export const MAX_SYNC_BATCH = 200;
+
+/** POST /api/events/[eventId]/sync — the outer shape; each record is checked on its own. */
+export const syncRequestSchema = z.object({
+  deviceId: z.string().min(1).max(64),
+  records: z.array(z.unknown()).min(1, "Send at least one record").max(MAX_SYNC_BATCH),
+});
+
+export type SyncRecordResult =
+  | { id: string; status: "stored" | "duplicate" }
+  | { id: string | null; status: "refused"; reason: string };
+
+export type SyncVerdict = {
+  entryId: string;
+  status: "waiting" | "cleared" | "moved-up" | "re-measure" | "held";
+  classId: string | null;
+  reason: string;
+  flags: string[];
+  needsChief: boolean;
+  computedAt: string;
+};
+
+export type SyncResponse = { results: SyncRecordResult[]; verdicts: SyncVerdict[]; receivedAt: string };
