@@ -1,0 +1,65 @@
+import "server-only";
+import { and, eq, sql } from "drizzle-orm";
+import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
+import type { PassReadiness } from "../../lib/passes/pass-blockers";
+import { getDb } from "../client";
+import { entries, events, payments, ruleSetVersions, venues, waivers } from "../schema";
+
+/** An entry with what its pass shows and what decides whether it may have one, or null. */
+export async function getEntryForPass({ entryId }: { entryId: string }) {
+  const db = getDb();
+  const [row] = await db
+    .select({
+      entryId: entries.id,
+      eventId: entries.eventId,
+      carNumber: entries.carNumber,
+      declaredClass: entries.declaredClass,
+      entryStatus: entries.status,
+      eventName: events.name,
+      eventDate: events.eventDate,
+      timeZone: events.timeZone,
+      venueName: venues.name,
+      ruleSetBody: ruleSetVersions.body,
+    })
+    .from(entries)
+    .innerJoin(events, eq(events.id, entries.eventId))
+    .innerJoin(venues, eq(venues.id, events.venueId))
+    .innerJoin(ruleSetVersions, eq(ruleSetVersions.id, events.ruleSetVersionId))
+    .where(eq(entries.id, entryId))
+    .limit(1);
+  if (!row) return null;
+  const [[waiver], [payment]] = await Promise.all([
+    db
+      .select({
+        signed: sql<number>`count(*)`,
+        complete: sql<number>`coalesce(sum(case when ${waivers.isMinor} = 0 or ${waivers.guardianSignedAt} is not null then 1 else 0 end), 0)`,
+      })
+      .from(waivers)
+      .where(and(eq(waivers.eventId, row.eventId), eq(waivers.entryId, entryId))),
+    db
+      .select({ paid: sql<number>`count(*)` })
+      .from(payments)
+      .where(
+        and(
+          eq(payments.eventId, row.eventId),
+          eq(payments.entryId, entryId),
+          eq(payments.status, "paid"),
+        ),
+      ),
+  ]);
+  const { ruleSetBody, ...rest } = row;
+  const waiverState: PassReadiness["waiver"] =
+    Number(waiver?.complete ?? 0) > 0
+      ? "signed"
+      : Number(waiver?.signed ?? 0) > 0
+        ? "needs-guardian"
+        : "missing";
+  return {
+    ...rest,
+    classNames: classNamesFromRuleSet(ruleSetBody),
+    waiver: waiverState,
+    paid: Number(payment?.paid ?? 0) > 0,
+  };
+}
+
+export type EntryForPass = NonNullable<Awaited<ReturnType<typeof getEntryForPass>>>;
