@@ -44,7 +44,17 @@ export default async function GaragePage() {
                     </p>
                   </div>
                 </div>
-                <VerdictBadge status={e.status} toClass={e.finalClass} />
+                <div className="flex items-center gap-3">
+                  <VerdictBadge status={e.status} toClass={e.finalClass} />
+                  <Link
+                    href={`/entries/${e.entryId}/pass`}
+                    className="btn-secondary min-w-touch"
+                    data-testid="entry-pass-link"
+                    aria-label={`Pass for car ${e.carNumber}, ${e.eventName}`}
+                  >
+                    Pass
+                  </Link>
+                </div>
                 <Link href={`/entries/${e.entryId}`} className="sr-only">
                   Entry {e.carNumber}
                 </Link>
