@@ -1,45 +1,49 @@
-/** What a pass names, big enough to read from arm's length: car number, class, event, expiry.
- *  No personal details: the pass page may be opened by anyone who scans the QR. */
-export function PassSummary({
-  carNumber,
-  className,
+import { formatEventDay } from "@/lib/passes/format-event-day";
+
+/** The car number and class of a pass, big enough to read from arm's length. */
+export function PassCarLine({ carNumber, className }: { carNumber: number; className: string }) {
+  return (
+    <div className="flex items-center gap-4">
+      <span
+        className="tabular min-w-32 rounded-xl bg-asphalt-950 px-4 py-2 text-center text-8xl font-bold leading-none text-asphalt-50"
+        data-testid="pass-car-number"
+      >
+        {carNumber}
+      </span>
+      <div className="min-w-0">
+        <p className="text-base font-semibold uppercase tracking-wider text-asphalt-700">Class</p>
+        <p className="text-3xl font-bold break-words">{className}</p>
+      </div>
+    </div>
+  );
+}
+
+/** What else a pass names: the event and when it stops being good. No personal details: the
+ *  pass check page may be opened by anyone who scans the QR. */
+export function PassFacts({
   eventName,
   eventDate,
   validUntil,
 }: {
-  carNumber: number;
-  className: string;
   eventName: string | null;
   eventDate: string | null;
   validUntil: string;
 }) {
   return (
-    <div className="flex items-center gap-4" data-testid="pass-summary">
-      <span
-        className="tabular min-w-28 rounded-xl bg-asphalt-950 px-4 py-2 text-center text-7xl font-bold leading-none text-asphalt-50"
-        data-testid="pass-car-number"
-      >
-        {carNumber}
-      </span>
-      <dl className="min-w-0 space-y-1 text-lg">
+    <dl className="space-y-2 text-lg" data-testid="pass-summary">
+      {eventName ? (
         <div>
-          <dt className="sr-only">Class</dt>
-          <dd className="text-2xl font-bold">{className}</dd>
+          <dt className="text-base font-semibold text-asphalt-700">Event</dt>
+          <dd className="font-semibold">
+            {eventName}
+            {eventDate ? <span className="block">{formatEventDay(eventDate)}</span> : null}
+          </dd>
         </div>
-        {eventName ? (
-          <div>
-            <dt className="sr-only">Event</dt>
-            <dd className="font-semibold">
-              {eventName}
-              {eventDate ? <span className="tabular font-normal"> · {eventDate}</span> : null}
-            </dd>
-          </div>
-        ) : null}
-        <div>
-          <dt className="inline font-semibold text-asphalt-800">Valid until </dt>
-          <dd className="tabular inline">{validUntil}</dd>
-        </div>
-      </dl>
-    </div>
+      ) : null}
+      <div>
+        <dt className="text-base font-semibold text-asphalt-700">Valid until</dt>
+        <dd className="tabular font-semibold">{validUntil}</dd>
+      </div>
+    </dl>
   );
 }

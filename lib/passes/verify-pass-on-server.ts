@@ -2,7 +2,7 @@ import "server-only";
 import { getPassKeyEventId } from "../../db/queries/get-pass-key-event-id";
 import { listEventPassKeys } from "../../db/queries/list-event-pass-keys";
 import { listRevokedPassIds } from "../../db/queries/list-revoked-pass-ids";
-import { type VerifyPassResult, verifyPass } from "../offline/verify-pass";
+import { passRefusalMessages, type VerifyPassResult, verifyPass } from "../offline/verify-pass";
 import { parseCompactJws } from "./parse-compact-jws";
 import { passHeaderSchema } from "./pass-claims-schema";
 
@@ -33,7 +33,7 @@ export async function verifyPassOnServer({
         result: {
           ok: false,
           code: "bad-signature",
-          message: "This pass has been altered or was not issued by Plumbline.",
+          message: passRefusalMessages["bad-signature"],
           detail: "no event has this key",
         },
       };

@@ -217,6 +217,7 @@ describe("the browser's pass code", () => {
       "lib/passes/pass-url.ts",
       "lib/passes/pass-expiry.ts",
       "lib/passes/format-pass-time.ts",
+      "lib/passes/format-event-day.ts",
     ];
     for (const file of browserFiles) {
       const source = readFileSync(path.join(root, file), "utf8");

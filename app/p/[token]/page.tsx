@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Caution } from "@/components/caution";
 import { PassRevokeForm } from "@/components/pass-revoke-form";
 import { PassState } from "@/components/pass-state";
-import { PassSummary } from "@/components/pass-summary";
+import { PassCarLine, PassFacts } from "@/components/pass-summary";
 import { getEntryForPass } from "@/db/queries/get-entry-for-pass";
 import { getEventRoles } from "@/db/queries/get-event-roles";
 import { getSessionUser } from "@/lib/auth/get-session-user";
@@ -37,10 +37,12 @@ export default async function PassCheckPage({ params }: { params: Promise<{ toke
       </div>
       <PassState valid={result.ok} message={result.ok ? undefined : result.message} />
       {claims ? (
-        <section className="card">
-          <PassSummary
+        <section className="card space-y-4">
+          <PassCarLine
             carNumber={claims.car}
             className={entry?.classNames[claims.cls] ?? claims.cls}
+          />
+          <PassFacts
             eventName={entry?.eventName ?? null}
             eventDate={entry?.eventDate ?? null}
             validUntil={formatPassTime(claims.exp, entry?.timeZone ?? "UTC")}

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Caution } from "@/components/caution";
 import { AttentionIcon } from "@/components/icons/state-icons";
 import { PassQr } from "@/components/pass-qr";
-import { PassSummary } from "@/components/pass-summary";
+import { PassCarLine, PassFacts } from "@/components/pass-summary";
 import { formatPassTime } from "@/lib/passes/format-pass-time";
 import { loadOwnPassPage } from "@/lib/passes/load-own-pass-page";
 
@@ -32,14 +32,16 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
           <p className="text-center text-2xl font-bold" data-testid="pass-instruction">
             Show this at the tech line
           </p>
+          <PassCarLine
+            carNumber={pass.claims.car}
+            className={entry.classNames[pass.claims.cls] ?? pass.claims.cls}
+          />
           <PassQr
             svg={pass.qrSvg}
             url={pass.url}
             label={`Pass QR code for car ${pass.claims.car}`}
           />
-          <PassSummary
-            carNumber={pass.claims.car}
-            className={entry.classNames[pass.claims.cls] ?? pass.claims.cls}
+          <PassFacts
             eventName={entry.eventName}
             eventDate={entry.eventDate}
             validUntil={formatPassTime(pass.claims.exp, entry.timeZone)}
