@@ -11,7 +11,9 @@ const publicKeyBytes = 32;
  * key given as its JWK `x` (base64url of the raw 32 bytes). Uses @noble/ed25519's async verify,
  * which hashes with WebCrypto SHA-512, so it runs unchanged in the browser and in Node 20.
  * Strict RFC 8032 rules (not ZIP-215): non-canonical encodings and small-order keys fail.
- * Never throws: a wrong-sized key or signature is simply not a valid signature.
+ * A wrong-sized key or signature is simply not a valid signature. Throws only when the browser
+ * has no WebCrypto (pages served over plain http to another device): refusing every pass as
+ * "altered" there would wrongly accuse the entrant.
  */
 export async function verifyEd25519JwsSignature({
   signingInput,
@@ -25,6 +27,11 @@ export async function verifyEd25519JwsSignature({
   const publicKey = decodeBase64Url(publicKeyX);
   if (!publicKey || publicKey.length !== publicKeyBytes) return false;
   if (signature.length !== signatureBytes) return false;
+  if (!globalThis.crypto?.subtle) {
+    throw new Error(
+      "This browser cannot check pass signatures here: open Plumbline over https (or on this device's own address).",
+    );
+  }
   try {
     return await verifyAsync(signature, signingInput, publicKey, { zip215: false });
   } catch {

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it, vi } from "vitest";
 import { type VerifyPassResult, verifyPass } from "@/lib/offline/verify-pass";
 import { decodeBase64Url } from "@/lib/passes/decode-base64url";
 import { encodeBase64Url } from "@/lib/passes/encode-base64url";
@@ -34,6 +34,10 @@ function withPart(token: string, index: number, value: unknown): string {
       : encodeBase64Url(new TextEncoder().encode(JSON.stringify(value)));
   return parts.join(".");
 }
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+});
 
 describe("verifyPass", () => {
   it("accepts a good pass and hands back its claims", async () => {
@@ -195,6 +199,11 @@ describe("verifyPass", () => {
     expect(codeOf(await check(withPart(good, 2, sig.slice(0, 63))))).toBe("bad-signature");
     const damaged = [{ kid: key.kid, x: key.publicKeyX.slice(0, 42) }];
     expect(codeOf(await check(good, { keys: damaged }))).toBe("bad-signature");
+  });
+
+  it("throws, rather than calling a good pass altered, where the browser has no WebCrypto", async () => {
+    vi.stubGlobal("crypto", undefined);
+    await expect(check(good)).rejects.toThrow(/https/);
   });
 
   it("names the entry it verified", async () => {
