@@ -15,11 +15,20 @@ import { VerdictView } from "./verdict-view";
 export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => void }) {
   const { pack, ruleSet, local, canChief } = useTech();
   const entry = pack.entries.find((e) => e.entryId === entryId);
-  const records = useMemo(() => mergeEntryRecords(entryId, pack.records, local), [entryId, pack.records, local]);
+  const records = useMemo(
+    () => mergeEntryRecords(entryId, pack.records, local),
+    [entryId, pack.records, local],
+  );
   const preview = useMemo(
     () =>
       entry
-        ? previewVerdict({ ruleSet, entry, records, eventDate: pack.event.eventDate, unitSystem: pack.event.unitSystem })
+        ? previewVerdict({
+            ruleSet,
+            entry,
+            records,
+            eventDate: pack.event.eventDate,
+            unitSystem: pack.event.unitSystem,
+          })
         : null,
     [entry, ruleSet, records, pack.event.eventDate, pack.event.unitSystem],
   );
@@ -34,14 +43,18 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
       </div>
     );
   }
-  const className = (id: string | null) => ruleSet.classes.find((c) => c.id === id)?.name ?? id ?? "";
+  const className = (id: string | null) =>
+    ruleSet.classes.find((c) => c.id === id)?.name ?? id ?? "";
   return (
     <article className="space-y-6" data-testid="car-card" data-entry-id={entryId}>
       <button type="button" className="btn-secondary" onClick={onBack}>
         ← All cars
       </button>
       <header className="flex items-start gap-3">
-        <span className="tabular rounded-lg bg-asphalt-950 px-3 py-2 text-4xl font-bold text-asphalt-50" data-testid="car-card-number">
+        <span
+          className="tabular rounded-lg bg-asphalt-950 px-3 py-2 text-4xl font-bold text-asphalt-50"
+          data-testid="car-card-number"
+        >
           {entry.carNumber}
         </span>
         <div>
@@ -54,12 +67,19 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
           </p>
         </div>
       </header>
-      <Caution title="Before you measure">Engine off, car on the level pad, and nobody under a car that is not secured on stands.</Caution>
+      <Caution title="Before you measure">
+        Engine off, car on the level pad, and nobody under a car that is not secured on stands.
+      </Caution>
       <section className="card space-y-4" aria-label="Verdict">
         {server ? (
           <div className="space-y-1" data-testid="server-verdict" data-status={server.status}>
-            <p className="text-base font-semibold uppercase tracking-wide text-asphalt-700">Server verdict (the one that counts)</p>
-            <VerdictBadge status={server.status} toClass={server.status === "moved-up" ? className(server.classId) : null} />
+            <p className="text-base font-semibold uppercase tracking-wide text-asphalt-700">
+              Server verdict (the one that counts)
+            </p>
+            <VerdictBadge
+              status={server.status}
+              toClass={server.status === "moved-up" ? className(server.classId) : null}
+            />
             <p className="text-lg" data-testid="server-verdict-reason">
               {server.reason}
             </p>
@@ -69,7 +89,14 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
             No server verdict yet.
           </p>
         )}
-        {preview ? <VerdictView verdict={preview} ruleSet={ruleSet} label="Preview on this phone" testId="preview-verdict" /> : null}
+        {preview ? (
+          <VerdictView
+            verdict={preview}
+            ruleSet={ruleSet}
+            label="Preview on this phone"
+            testId="preview-verdict"
+          />
+        ) : null}
       </section>
       <ReadingsPanel entryId={entryId} records={records} verdict={preview} />
       <ChecklistPanel entryId={entryId} verdict={preview} />

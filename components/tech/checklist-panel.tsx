@@ -13,7 +13,12 @@ export function ChecklistPanel({ entryId, verdict }: { entryId: string; verdict:
       </h2>
       <ul className="space-y-2">
         {ruleSet.safety.checklist.map((item) => (
-          <ChecklistItemForm key={item.id} entryId={entryId} item={item} result={verdict?.safety.find((s) => s.itemId === item.id)} />
+          <ChecklistItemForm
+            key={item.id}
+            entryId={entryId}
+            item={item}
+            result={verdict?.safety.find((s) => s.itemId === item.id)}
+          />
         ))}
       </ul>
     </section>

@@ -1,7 +1,7 @@
 "use client";
 import { useCallback, useState } from "react";
-import { verifyPass } from "@/lib/offline/verify-pass";
 import type { StoredPack } from "@/lib/offline/save-event-pack";
+import { verifyPass } from "@/lib/offline/verify-pass";
 import { extractPassToken } from "@/lib/passes/pass-url";
 import { PassScanner } from "./pass-scanner";
 
@@ -22,20 +22,36 @@ export function FindCar({ pack, onOpen }: { pack: StoredPack; onOpen: (entryId: 
         setRefusal("That code is not a Plumbline pass. Scan again, or type the car number.");
         return;
       }
-      const result = await verifyPass({
-        token,
-        eventId: pack.event.id,
-        keys: pack.passKeys,
-        revokedPassIds: pack.revokedPassIds,
-        now: new Date(),
-      });
+      let result: Awaited<ReturnType<typeof verifyPass>>;
+      try {
+        result = await verifyPass({
+          token,
+          eventId: pack.event.id,
+          keys: pack.passKeys,
+          revokedPassIds: pack.revokedPassIds,
+          now: new Date(),
+        });
+      } catch {
+        setRefusal(
+          "This browser cannot check pass signatures here (it needs a secure page). Type the car number instead.",
+        );
+        return;
+      }
       if (!result.ok) {
         setRefusal(result.message);
         return;
       }
       const entry = pack.entries.find((e) => e.entryId === result.claims.ent);
       if (!entry) {
-        setRefusal("The pass is genuine but this car is not in the event pack. Refresh the pack when you have signal.");
+        setRefusal(
+          "The pass is genuine but this car is not in the event pack. Refresh the pack when you have signal.",
+        );
+        return;
+      }
+      if (entry.carNumber !== result.claims.car) {
+        setRefusal(
+          `This pass says car ${result.claims.car} but the entry is now car ${entry.carNumber}. Ask the entrant to open their pass again.`,
+        );
         return;
       }
       setRefusal(null);
@@ -62,7 +78,11 @@ export function FindCar({ pack, onOpen }: { pack: StoredPack; onOpen: (entryId: 
       {scanning ? (
         <PassScanner onText={checkPass} onClose={() => setScanning(false)} />
       ) : (
-        <button type="button" className="btn-primary min-h-16 w-full text-xl" onClick={() => setScanning(true)}>
+        <button
+          type="button"
+          className="btn-primary min-h-16 w-full text-xl"
+          onClick={() => setScanning(true)}
+        >
           Scan a pass
         </button>
       )}
@@ -90,7 +110,11 @@ export function FindCar({ pack, onOpen }: { pack: StoredPack; onOpen: (entryId: 
         </button>
       </form>
       {refusal ? (
-        <p className="rounded-lg border-2 border-stopped-line bg-stopped-soft p-3 text-lg font-semibold text-stopped" role="alert" data-testid="pass-refusal">
+        <p
+          className="rounded-lg border-2 border-stopped-line bg-stopped-soft p-3 text-lg font-semibold text-stopped"
+          role="alert"
+          data-testid="pass-refusal"
+        >
           {refusal}
         </p>
       ) : null}

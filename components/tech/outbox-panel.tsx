@@ -41,10 +41,20 @@ export function OutboxPanel({
           {refused > 0 ? ` · ${refused} refused` : ""}
         </p>
         <div className="flex gap-2">
-          <button type="button" className="btn-secondary" onClick={onSendNow} disabled={running || pending === 0 || !online}>
+          <button
+            type="button"
+            className="btn-secondary"
+            onClick={onSendNow}
+            disabled={running || pending === 0 || !online}
+          >
             {running ? "Sending…" : "Send now"}
           </button>
-          <button type="button" className="btn-secondary" onClick={() => setOpen((v) => !v)} aria-expanded={open}>
+          <button
+            type="button"
+            className="btn-secondary"
+            onClick={() => setOpen((v) => !v)}
+            aria-expanded={open}
+          >
             {open ? "Hide list" : "Show list"}
           </button>
         </div>
@@ -67,19 +77,30 @@ export function OutboxPanel({
       {held > 0 ? (
         <p className="text-base font-semibold text-stopped">
           {held} records are held until you sign in again. They are safe on this phone.{" "}
-          <a className="underline" href={`/sign-in?callbackUrl=${encodeURIComponent(typeof location === "undefined" ? "/home" : location.pathname)}`}>
+          <a
+            className="underline"
+            href={`/sign-in?callbackUrl=${encodeURIComponent(typeof location === "undefined" ? "/home" : location.pathname)}`}
+          >
             Sign in
           </a>
         </p>
       ) : null}
       {open ? (
-        <ul className="max-h-80 divide-y divide-asphalt-200 overflow-y-auto" data-testid="outbox-list">
+        <ul
+          className="max-h-80 divide-y divide-asphalt-200 overflow-y-auto"
+          data-testid="outbox-list"
+        >
           {[...local].reverse().map((item) => (
             <li key={item.record.id} className="py-2 text-base" data-state={item.state}>
-              <span className="font-semibold">Car {carNumberOf(item.record.entryId) ?? "?"}</span> · {item.record.kind}
+              <span className="font-semibold">Car {carNumberOf(item.record.entryId) ?? "?"}</span> ·{" "}
+              {item.record.kind}
               {item.record.kind === "reading" ? ` (${item.record.payload.dimension})` : ""} ·{" "}
-              <span className={item.state === "refused" ? "font-semibold text-stopped" : ""}>{stateWords[item.state]}</span>
-              {item.lastError && item.state !== "sent" ? <span className="block text-asphalt-700">{item.lastError}</span> : null}
+              <span className={item.state === "refused" ? "font-semibold text-stopped" : ""}>
+                {stateWords[item.state]}
+              </span>
+              {item.lastError && item.state !== "sent" ? (
+                <span className="block text-asphalt-700">{item.lastError}</span>
+              ) : null}
             </li>
           ))}
         </ul>

@@ -2,9 +2,13 @@
 import type { StoredPack } from "@/lib/offline/save-event-pack";
 
 function timeIn(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", { hour: "2-digit", minute: "2-digit", day: "numeric", month: "short", timeZone }).format(
-    new Date(iso),
-  );
+  return new Intl.DateTimeFormat("en-GB", {
+    hour: "2-digit",
+    minute: "2-digit",
+    day: "numeric",
+    month: "short",
+    timeZone,
+  }).format(new Date(iso));
 }
 
 /** When this phone last fetched the event pack, and the "Prepare for offline" step. */
@@ -30,9 +34,16 @@ export function PackStatus({
           .
         </p>
       ) : (
-        <p className="text-base font-semibold">No event pack on this phone yet. Prepare it while you have signal.</p>
+        <p className="text-base font-semibold">
+          No event pack on this phone yet. Prepare it while you have signal.
+        </p>
       )}
-      <button type="button" className="btn-primary w-full sm:w-auto" onClick={onPrepare} disabled={preparing}>
+      <button
+        type="button"
+        className="btn-primary w-full sm:w-auto"
+        onClick={onPrepare}
+        disabled={preparing}
+      >
         {preparing ? "Preparing…" : "Prepare for offline"}
       </button>
       {message ? (

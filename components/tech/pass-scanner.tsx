@@ -7,7 +7,13 @@ type Scanner = { stop: () => Promise<void>; clear: () => void; isScanning: boole
  * The phone camera reading a pass QR, with html5-qrcode loaded only when the camera opens.
  * Calls `onText` once with what the code says; the caller verifies it.
  */
-export function PassScanner({ onText, onClose }: { onText: (text: string) => void; onClose: () => void }) {
+export function PassScanner({
+  onText,
+  onClose,
+}: {
+  onText: (text: string) => void;
+  onClose: () => void;
+}) {
   const elementId = `scanner-${useId().replace(/:/g, "")}`;
   const [problem, setProblem] = useState<string | null>(null);
   const done = useRef(false);
@@ -45,14 +51,21 @@ export function PassScanner({ onText, onClose }: { onText: (text: string) => voi
     return () => {
       cancelled = true;
       const s = scanner;
-      if (s?.isScanning) void s.stop().then(() => s.clear()).catch(() => {});
+      if (s?.isScanning)
+        void s
+          .stop()
+          .then(() => s.clear())
+          .catch(() => {});
     };
   }, [elementId, onText]);
 
   return (
     <div className="card space-y-3" data-testid="pass-scanner">
       <p className="text-lg font-semibold">Point the camera at the pass</p>
-      <div id={elementId} className="mx-auto w-full max-w-sm overflow-hidden rounded-lg bg-asphalt-900" />
+      <div
+        id={elementId}
+        className="mx-auto w-full max-w-sm overflow-hidden rounded-lg bg-asphalt-900"
+      />
       {problem ? (
         <p className="field-error" role="alert">
           {problem}

@@ -31,7 +31,13 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
       deviceId,
       now,
     });
-    const photo: Photo = { ...draft, payload: { ...draft.payload, storageKey: photoStorageKey({ eventId, entryId, recordId: draft.id }) } };
+    const photo: Photo = {
+      ...draft,
+      payload: {
+        ...draft.payload,
+        storageKey: photoStorageKey({ eventId, entryId, recordId: draft.id }),
+      },
+    };
     await record(photo, await shrinkPhoto(file));
     setCaption("");
     setBusy(false);
@@ -44,7 +50,12 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
       </h2>
       <label className="block">
         <span className="field-label">Caption for the next photo</span>
-        <input className="field-input" value={caption} onChange={(e) => setCaption(e.target.value)} placeholder="e.g. wing end plate, left" />
+        <input
+          className="field-input"
+          value={caption}
+          onChange={(e) => setCaption(e.target.value)}
+          placeholder="e.g. wing end plate, left"
+        />
       </label>
       <label className={`btn-secondary w-full ${canWrite ? "" : "pointer-events-none opacity-60"}`}>
         {busy ? "Saving photo…" : "Take a photo"}
@@ -70,12 +81,26 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
         onSubmit={(e) => {
           e.preventDefault();
           if (!note.trim()) return;
-          void record(makeRecord({ kind: "note", payload: { text: note.trim() }, entryId, officialId: official.id, deviceId, now: new Date() })).then(() => setNote(""));
+          void record(
+            makeRecord({
+              kind: "note",
+              payload: { text: note.trim() },
+              entryId,
+              officialId: official.id,
+              deviceId,
+              now: new Date(),
+            }),
+          ).then(() => setNote(""));
         }}
       >
         <label className="block">
           <span className="field-label">Note</span>
-          <textarea className="field-input min-h-24 py-2" value={note} onChange={(e) => setNote(e.target.value)} maxLength={4000} />
+          <textarea
+            className="field-input min-h-24 py-2"
+            value={note}
+            onChange={(e) => setNote(e.target.value)}
+            maxLength={4000}
+          />
         </label>
         <button type="submit" className="btn-secondary" disabled={!canWrite || !note.trim()}>
           Save note
@@ -119,7 +144,15 @@ function PhotoThumb({ photo }: { photo: Photo }) {
   }, [eventId, isLocal, photo.id, photo.entryId]);
   return (
     <li className="overflow-hidden rounded-lg border border-asphalt-300 bg-asphalt-100">
-      {src ? <img src={src} alt={photo.payload.caption ?? "Tech-line photo"} className="aspect-square w-full object-cover" /> : <div className="aspect-square" />}
+      {src ? (
+        <img
+          src={src}
+          alt={photo.payload.caption ?? "Tech-line photo"}
+          className="aspect-square w-full object-cover"
+        />
+      ) : (
+        <div className="aspect-square" />
+      )}
       {photo.payload.caption ? <p className="p-1 text-sm">{photo.payload.caption}</p> : null}
     </li>
   );

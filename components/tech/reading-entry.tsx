@@ -9,13 +9,22 @@ import { type Corner, type Dimension, SIGNED_DIMENSIONS } from "@/lib/scrutineer
 import { defaultInstruments } from "@/lib/tech/default-instruments";
 import { useTech } from "./tech-context";
 
-const unitOf = (d: Dimension) => (d === "cornerWeightKg" ? "kg" : d === "noiseDbA" ? "dB(A)" : "mm");
+const unitOf = (d: Dimension) =>
+  d === "cornerWeightKg" ? "kg" : d === "noiseDbA" ? "dB(A)" : "mm";
 
 /**
  * Record one reading of one dimension: where it is taken (drawing), the value in the event's unit
  * (or any unit written with it), the instrument, and the conditions the rule set asks for.
  */
-export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; dimension: Dimension; corner: Corner | null }) {
+export function ReadingEntry({
+  entryId,
+  dimension,
+  corner,
+}: {
+  entryId: string;
+  dimension: Dimension;
+  corner: Corner | null;
+}) {
   const { ruleSet, pack, official, deviceId, record, canWrite } = useTech();
   const unitSystem = pack.event.unitSystem;
   const massUnit = unitSystem === "mm" ? "kg" : "lb";
@@ -25,7 +34,8 @@ export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; 
   const [text, setText] = useState("");
   const [error, setError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const conditions = dimension === "cornerWeightKg" ? ruleSet.measurement.weighing : ruleSet.measurement.aero;
+  const conditions =
+    dimension === "cornerWeightKg" ? ruleSet.measurement.weighing : ruleSet.measurement.aero;
   const [driverAboard, setDriverAboard] = useState(conditions.driverAboard);
   const [levelPad, setLevelPad] = useState(true);
   const label = dimensionLabel(dimension, corner);
@@ -34,30 +44,63 @@ export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; 
     setSaved(null);
     let value: number;
     if (kind === "mm") {
-      const parsed = parseLength(text, { defaultUnit: unitSystem, allowNegative: (SIGNED_DIMENSIONS as readonly Dimension[]).includes(dimension) });
+      const parsed = parseLength(text, {
+        defaultUnit: unitSystem,
+        allowNegative: (SIGNED_DIMENSIONS as readonly Dimension[]).includes(dimension),
+      });
       if (!parsed.ok) return setError(parsed.message);
       value = parsed.mm;
     } else {
       const n = Number(text.replace(",", ".").trim());
-      if (!text.trim() || !Number.isFinite(n) || n < 0) return setError(`Write the ${kind === "kg" ? "weight" : "level"} as a number, e.g. ${kind === "kg" ? "312.5" : "98.5"}`);
+      if (!text.trim() || !Number.isFinite(n) || n < 0)
+        return setError(
+          `Write the ${kind === "kg" ? "weight" : "level"} as a number, e.g. ${kind === "kg" ? "312.5" : "98.5"}`,
+        );
       value = kind === "kg" ? convertMass(n, massUnit, "kg") : n;
     }
     const instrument = instruments.find((i) => i.id === instrumentId);
     if (!instrument) return setError("Pick the instrument you used");
     setError(null);
-    const base = { value, instrument: { id: instrument.id, name: instrument.name, standardUncertainty: instrument.standardUncertainty }, conditions: { driverAboard, levelPad } };
+    const base = {
+      value,
+      instrument: {
+        id: instrument.id,
+        name: instrument.name,
+        standardUncertainty: instrument.standardUncertainty,
+      },
+      conditions: { driverAboard, levelPad },
+    };
     const payload =
       dimension === "cornerWeightKg"
         ? { ...base, dimension, corner: corner ?? "lf" }
         : ({ ...base, dimension } as Parameters<typeof makeRecord<"reading">>[0]["payload"]);
-    await record(makeRecord({ kind: "reading", payload, entryId, officialId: official.id, deviceId, now: new Date() }));
+    await record(
+      makeRecord({
+        kind: "reading",
+        payload,
+        entryId,
+        officialId: official.id,
+        deviceId,
+        now: new Date(),
+      }),
+    );
     setText("");
     setSaved(`Saved on this phone: ${label} ${text}`);
   };
 
-  const placeholder = kind === "mm" ? (unitSystem === "mm" ? "e.g. 1380 mm" : 'e.g. 54 3/8"') : kind === "kg" ? `e.g. 312 (${massUnit})` : "e.g. 98.5";
+  const placeholder =
+    kind === "mm"
+      ? unitSystem === "mm"
+        ? "e.g. 1380 mm"
+        : 'e.g. 54 3/8"'
+      : kind === "kg"
+        ? `e.g. 312 (${massUnit})`
+        : "e.g. 98.5";
   return (
-    <div className="space-y-3" data-testid={`reading-entry-${dimension}${corner ? `-${corner}` : ""}`}>
+    <div
+      className="space-y-3"
+      data-testid={`reading-entry-${dimension}${corner ? `-${corner}` : ""}`}
+    >
       <div className="mx-auto max-w-xs">
         <ReadingDiagram dimension={dimension} {...(corner ? { corner } : {})} />
       </div>
@@ -89,7 +132,11 @@ export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; 
         ) : null}
         <label className="block">
           <span className="field-label">Instrument</span>
-          <select className="field-input" value={instrumentId} onChange={(e) => setInstrumentId(e.target.value)}>
+          <select
+            className="field-input"
+            value={instrumentId}
+            onChange={(e) => setInstrumentId(e.target.value)}
+          >
             {instruments.map((i) => (
               <option key={i.id} value={i.id}>
                 {i.name} (u = {i.standardUncertainty} {i.unit})
@@ -100,11 +147,21 @@ export function ReadingEntry({ entryId, dimension, corner }: { entryId: string; 
         <fieldset className="flex flex-wrap gap-4">
           <legend className="field-label">Measured with</legend>
           <label className="flex min-h-touch items-center gap-2">
-            <input type="checkbox" className="size-6" checked={levelPad} onChange={(e) => setLevelPad(e.target.checked)} />
+            <input
+              type="checkbox"
+              className="size-6"
+              checked={levelPad}
+              onChange={(e) => setLevelPad(e.target.checked)}
+            />
             car on the level pad
           </label>
           <label className="flex min-h-touch items-center gap-2">
-            <input type="checkbox" className="size-6" checked={driverAboard} onChange={(e) => setDriverAboard(e.target.checked)} />
+            <input
+              type="checkbox"
+              className="size-6"
+              checked={driverAboard}
+              onChange={(e) => setDriverAboard(e.target.checked)}
+            />
             driver aboard {conditions.driverAboard ? "(the rule says yes)" : "(the rule says no)"}
           </label>
         </fieldset>

@@ -1,6 +1,11 @@
 import type { Corner, Dimension } from "@/lib/scrutineer/record-schema";
 
-export type ReadingTarget = { key: string; dimension: Dimension; corner: Corner | null; group: string };
+export type ReadingTarget = {
+  key: string;
+  dimension: Dimension;
+  corner: Corner | null;
+  group: string;
+};
 
 /** What the tech sheet asks a scrutineer to read, in the order they walk round the car. */
 export const readingTargets: ReadingTarget[] = [
@@ -11,7 +16,12 @@ export const readingTargets: ReadingTarget[] = [
   { key: "bodyWidthMm", dimension: "bodyWidthMm", corner: null, group: "Wing" },
   { key: "wingChordMm", dimension: "wingChordMm", corner: null, group: "Wing" },
   { key: "endPlateThicknessMm", dimension: "endPlateThicknessMm", corner: null, group: "Wing" },
-  { key: "splitterProtrusionMm", dimension: "splitterProtrusionMm", corner: null, group: "Splitter" },
+  {
+    key: "splitterProtrusionMm",
+    dimension: "splitterProtrusionMm",
+    corner: null,
+    group: "Splitter",
+  },
   { key: "splitterWidthMm", dimension: "splitterWidthMm", corner: null, group: "Splitter" },
   { key: "cornerWeightKg-lf", dimension: "cornerWeightKg", corner: "lf", group: "Scales" },
   { key: "cornerWeightKg-rf", dimension: "cornerWeightKg", corner: "rf", group: "Scales" },

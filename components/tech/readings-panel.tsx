@@ -11,12 +11,25 @@ import { useTech } from "./tech-context";
 type Reading = Extract<TechRecord, { kind: "reading" }>;
 
 /** The readings part of the car card: what to read, what has been read, and the entry form. */
-export function ReadingsPanel({ entryId, records, verdict }: { entryId: string; records: TechRecord[]; verdict: Verdict | null }) {
+export function ReadingsPanel({
+  entryId,
+  records,
+  verdict,
+}: {
+  entryId: string;
+  records: TechRecord[];
+  verdict: Verdict | null;
+}) {
   const { pack, local, official } = useTech();
   const [open, setOpen] = useState<string | null>(null);
-  const voided = new Set(records.flatMap((r) => (r.kind === "void" ? [r.payload.targetRecordId] : [])));
+  const voided = new Set(
+    records.flatMap((r) => (r.kind === "void" ? [r.payload.targetRecordId] : [])),
+  );
   const readings = records.filter((r): r is Reading => r.kind === "reading");
-  const nameOf = (id: string) => (id === official.id ? "you" : (pack.officials.find((o) => o.userId === id)?.name ?? "another official"));
+  const nameOf = (id: string) =>
+    id === official.id
+      ? "you"
+      : (pack.officials.find((o) => o.userId === id)?.name ?? "another official");
   const stateOf = (id: string) => local.find((l) => l.record.id === id)?.state;
   const groups = [...new Set(readingTargets.map((t) => t.group))];
 
@@ -32,8 +45,15 @@ export function ReadingsPanel({ entryId, records, verdict }: { entryId: string; 
             {readingTargets
               .filter((t) => t.group === group)
               .map((target) => {
-                const mine = readings.filter((r) => r.payload.dimension === target.dimension && (target.corner === null || ("corner" in r.payload && r.payload.corner === target.corner)));
-                const summary = verdict?.dimensions.find((d) => d.dimension === target.dimension && d.corner === target.corner);
+                const mine = readings.filter(
+                  (r) =>
+                    r.payload.dimension === target.dimension &&
+                    (target.corner === null ||
+                      ("corner" in r.payload && r.payload.corner === target.corner)),
+                );
+                const summary = verdict?.dimensions.find(
+                  (d) => d.dimension === target.dimension && d.corner === target.corner,
+                );
                 const isOpen = open === target.key;
                 return (
                   <li key={target.key} className="rounded-lg border-2 border-asphalt-300 bg-white">
@@ -44,9 +64,15 @@ export function ReadingsPanel({ entryId, records, verdict }: { entryId: string; 
                       aria-expanded={isOpen}
                       data-testid={`reading-target-${target.key}`}
                     >
-                      <span className="font-semibold capitalize">{dimensionLabel(target.dimension, target.corner)}</span>
+                      <span className="font-semibold capitalize">
+                        {dimensionLabel(target.dimension, target.corner)}
+                      </span>
                       <span className="tabular text-base">
-                        {summary ? `${formatReadingValue(target.dimension, summary.mean, pack.event.unitSystem)} · ${summary.n}×` : mine.length > 0 ? `${mine.length}×` : "not read"}
+                        {summary
+                          ? `${formatReadingValue(target.dimension, summary.mean, pack.event.unitSystem)} · ${summary.n}×`
+                          : mine.length > 0
+                            ? `${mine.length}×`
+                            : "not read"}
                       </span>
                     </button>
                     {isOpen ? (
@@ -54,15 +80,33 @@ export function ReadingsPanel({ entryId, records, verdict }: { entryId: string; 
                         {mine.length > 0 ? (
                           <ul className="space-y-1" data-testid="reading-list">
                             {mine.map((r) => (
-                              <li key={r.id} className={`tabular text-base ${voided.has(r.id) ? "line-through opacity-70" : ""}`}>
-                                <strong>{formatReadingValue(r.payload.dimension, r.payload.value, pack.event.unitSystem)}</strong> by {nameOf(r.officialId)} ·{" "}
-                                {r.payload.instrument.name} · {stateOf(r.id) ? (stateOf(r.id) === "sent" || stateOf(r.id) === "duplicate" ? "sent" : "on this phone") : "on the server"}
+                              <li
+                                key={r.id}
+                                className={`tabular text-base ${voided.has(r.id) ? "line-through opacity-70" : ""}`}
+                              >
+                                <strong>
+                                  {formatReadingValue(
+                                    r.payload.dimension,
+                                    r.payload.value,
+                                    pack.event.unitSystem,
+                                  )}
+                                </strong>{" "}
+                                by {nameOf(r.officialId)} · {r.payload.instrument.name} ·{" "}
+                                {stateOf(r.id)
+                                  ? stateOf(r.id) === "sent" || stateOf(r.id) === "duplicate"
+                                    ? "sent"
+                                    : "on this phone"
+                                  : "on the server"}
                                 {voided.has(r.id) ? " · void" : ""}
                               </li>
                             ))}
                           </ul>
                         ) : null}
-                        <ReadingEntry entryId={entryId} dimension={target.dimension} corner={target.corner} />
+                        <ReadingEntry
+                          entryId={entryId}
+                          dimension={target.dimension}
+                          corner={target.corner}
+                        />
                       </div>
                     ) : null}
                   </li>

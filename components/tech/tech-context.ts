@@ -1,7 +1,7 @@
 "use client";
 import { createContext, useContext } from "react";
-import type { StoredPack } from "@/lib/offline/save-event-pack";
 import type { LocalRecord } from "@/lib/offline/local-record";
+import type { StoredPack } from "@/lib/offline/save-event-pack";
 import type { TechRecord } from "@/lib/scrutineer/record-schema";
 import type { RuleSet } from "@/lib/scrutineer/rule-set-schema";
 

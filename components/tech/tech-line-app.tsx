@@ -51,7 +51,7 @@ export function TechLineApp(props: {
     const url = new URL(window.location.href);
     if (id) url.searchParams.set("entry", id);
     else url.searchParams.delete("entry");
-    window.history.pushState(null, "", url);
+    window.history.pushState(null, "", url.toString());
     setEntryId(id);
     window.scrollTo({ top: 0 });
   }, []);
@@ -85,15 +85,26 @@ export function TechLineApp(props: {
       const server = pack.verdicts.find((v) => v.entryId === entry.entryId);
       const hasLocal = data.local.some((l) => l.record.entryId === entry.entryId && isPending(l));
       const preview = hasLocal
-        ? previewVerdict({ ruleSet, entry, records: mergeEntryRecords(entry.entryId, pack.records, data.local), eventDate: pack.event.eventDate, unitSystem: pack.event.unitSystem })
+        ? previewVerdict({
+            ruleSet,
+            entry,
+            records: mergeEntryRecords(entry.entryId, pack.records, data.local),
+            eventDate: pack.event.eventDate,
+            unitSystem: pack.event.unitSystem,
+          })
         : null;
       const status = preview?.status ?? server?.status ?? "waiting";
       const classId = preview?.classId ?? server?.classId ?? null;
       return {
         entryId: entry.entryId,
         carNumber: entry.carNumber,
-        declaredClass: ruleSet.classes.find((c) => c.id === entry.declaredClassId)?.name ?? entry.declaredClassId,
-        finalClass: status === "moved-up" ? (ruleSet.classes.find((c) => c.id === classId)?.name ?? classId) : null,
+        declaredClass:
+          ruleSet.classes.find((c) => c.id === entry.declaredClassId)?.name ??
+          entry.declaredClassId,
+        finalClass:
+          status === "moved-up"
+            ? (ruleSet.classes.find((c) => c.id === classId)?.name ?? classId)
+            : null,
         car: `${entry.car} · ${entry.colour}`,
         drivers: entry.drivers,
         status,
@@ -108,7 +119,12 @@ export function TechLineApp(props: {
   const fetchNote = data.lastFetch?.message ?? null;
   const header = (
     <div className="space-y-3">
-      <PackStatus pack={pack} preparing={preparing} message={prepareMessage ?? fetchNote} onPrepare={() => void prepare()} />
+      <PackStatus
+        pack={pack}
+        preparing={preparing}
+        message={prepareMessage ?? fetchNote}
+        onPrepare={() => void prepare()}
+      />
       <OutboxPanel
         local={data.local}
         online={outbox.online}
@@ -119,7 +135,17 @@ export function TechLineApp(props: {
     </div>
   );
   if (!pack || !ruleSet) return header;
-  const context: TechContextValue = { eventId, official: props.official, deviceId, canWrite: props.canWrite, canChief: props.canChief, pack, ruleSet, local: data.local, record };
+  const context: TechContextValue = {
+    eventId,
+    official: props.official,
+    deviceId,
+    canWrite: props.canWrite,
+    canChief: props.canChief,
+    pack,
+    ruleSet,
+    local: data.local,
+    record,
+  };
   return (
     <TechContext.Provider value={context}>
       <div className="space-y-4">

@@ -31,25 +31,36 @@ export function VerdictView({
   testId: string;
 }) {
   const className = (id: string | null) => ruleSet.classes.find((c) => c.id === id)?.name ?? id;
-  const check = verdict.classChecks.find((c) => c.classId === verdict.classId) ?? verdict.classChecks[0];
+  const check =
+    verdict.classChecks.find((c) => c.classId === verdict.classId) ?? verdict.classChecks[0];
   return (
     <div className="space-y-2" data-testid={testId} data-status={verdict.status}>
       <p className="text-base font-semibold uppercase tracking-wide text-asphalt-700">{label}</p>
-      <VerdictBadge status={verdict.status} toClass={verdict.status === "moved-up" ? className(verdict.classId) : null} />
+      <VerdictBadge
+        status={verdict.status}
+        toClass={verdict.status === "moved-up" ? className(verdict.classId) : null}
+      />
       <p className="text-lg" data-testid={`${testId}-reason`}>
         {verdict.reason}
       </p>
       {verdict.flags.includes("disagreement") ? (
-        <p className="font-semibold text-attention">Readings disagree: the chief scrutineer decides.</p>
+        <p className="font-semibold text-attention">
+          Readings disagree: the chief scrutineer decides.
+        </p>
       ) : null}
       <details className="rounded-lg border border-asphalt-300 p-2">
-        <summary className="min-h-touch cursor-pointer content-center font-semibold">Every rule and item</summary>
+        <summary className="min-h-touch cursor-pointer content-center font-semibold">
+          Every rule and item
+        </summary>
         {check ? (
           <ul className="mt-2 space-y-1">
             <li className="font-semibold">Class {check.className}</li>
             {check.rules.map((rule) => (
               <li key={`${check.classId}-${rule.ruleId}`} className="text-base">
-                <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>{outcomeWord[rule.outcome]}</span> — {rule.reason}
+                <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>
+                  {outcomeWord[rule.outcome]}
+                </span>{" "}
+                — {rule.reason}
               </li>
             ))}
           </ul>
@@ -58,12 +69,18 @@ export function VerdictView({
           <li className="font-semibold">Safety</li>
           {verdict.safety.map((item) => (
             <li key={item.itemId} className="text-base">
-              <span className={`font-semibold ${outcomeClass[item.outcome] ?? ""}`}>{outcomeWord[item.outcome]}</span> — {item.reason}
+              <span className={`font-semibold ${outcomeClass[item.outcome] ?? ""}`}>
+                {outcomeWord[item.outcome]}
+              </span>{" "}
+              — {item.reason}
             </li>
           ))}
           {verdict.eventRules.map((rule) => (
             <li key={rule.ruleId} className="text-base">
-              <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>{outcomeWord[rule.outcome]}</span> — {rule.reason}
+              <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>
+                {outcomeWord[rule.outcome]}
+              </span>{" "}
+              — {rule.reason}
             </li>
           ))}
         </ul>

@@ -1,13 +1,22 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
+import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import { getDb } from "../client";
-import { cars, entries, users, verdicts } from "../schema";
+import { cars, entries, events, ruleSetVersions, users, verdicts } from "../schema";
 
 const coDriver = alias(users, "co_driver");
 
-/** An event's entries (not withdrawn) with car, drivers and the stored verdict, by car number. */
+/** An event's entries (not withdrawn) with car, drivers and the stored verdict, by car number,
+ *  with class names from the event's rule set beside the class ids. */
 export async function listEventEntries({ eventId }: { eventId: string }) {
+  const [ruleSet] = await getDb()
+    .select({ body: ruleSetVersions.body })
+    .from(events)
+    .innerJoin(ruleSetVersions, eq(ruleSetVersions.id, events.ruleSetVersionId))
+    .where(eq(events.id, eventId))
+    .limit(1);
+  const names = classNamesFromRuleSet(ruleSet?.body);
   const rows = await getDb()
     .select({
       entryId: entries.id,
@@ -38,6 +47,8 @@ export async function listEventEntries({ eventId }: { eventId: string }) {
     .orderBy(asc(entries.carNumber));
   return rows.map((row) => ({
     ...row,
+    declaredClassName: names[row.declaredClass] ?? row.declaredClass,
+    finalClassName: row.finalClass ? (names[row.finalClass] ?? row.finalClass) : null,
     status: row.status ?? "waiting",
     needsChief: row.needsChief ?? false,
   }));

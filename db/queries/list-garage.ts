@@ -1,7 +1,8 @@
 import "server-only";
 import { and, asc, desc, eq, or } from "drizzle-orm";
+import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import { getDb } from "../client";
-import { cars, entries, events, verdicts } from "../schema";
+import { cars, entries, events, ruleSetVersions, verdicts } from "../schema";
 
 /** A person's cars, and every entry they drive, co-drive or own, newest event first. */
 export async function listGarage({ userId }: { userId: string }) {
@@ -32,10 +33,12 @@ export async function listGarage({ userId }: { userId: string }) {
         status: verdicts.status,
         finalClass: verdicts.finalClass,
         reason: verdicts.reason,
+        ruleSetBody: ruleSetVersions.body,
       })
       .from(entries)
       .innerJoin(cars, eq(cars.id, entries.carId))
       .innerJoin(events, eq(events.id, entries.eventId))
+      .innerJoin(ruleSetVersions, eq(ruleSetVersions.id, events.ruleSetVersionId))
       .leftJoin(
         verdicts,
         and(eq(verdicts.eventId, entries.eventId), eq(verdicts.entryId, entries.id)),
@@ -47,7 +50,15 @@ export async function listGarage({ userId }: { userId: string }) {
   ]);
   return {
     cars: carRows.map((c) => ({ ...c, notes: c.notes ?? "" })),
-    entries: entryRows.map((e) => ({ ...e, status: e.status ?? "waiting" })),
+    entries: entryRows.map(({ ruleSetBody, ...e }) => {
+      const names = classNamesFromRuleSet(ruleSetBody);
+      return {
+        ...e,
+        declaredClass: names[e.declaredClass] ?? e.declaredClass,
+        finalClass: e.finalClass ? (names[e.finalClass] ?? e.finalClass) : null,
+        status: e.status ?? "waiting",
+      };
+    }),
   };
 }
 

@@ -15,8 +15,8 @@ export type EntryListRow = {
 type Source = {
   entryId: string;
   carNumber: number;
-  declaredClass: string;
-  finalClass: string | null;
+  declaredClassName: string;
+  finalClassName: string | null;
   make: string;
   model: string;
   year: number;
@@ -32,8 +32,8 @@ export function toEntryListRow(row: Source): EntryListRow {
   return {
     entryId: row.entryId,
     carNumber: row.carNumber,
-    declaredClass: row.declaredClass,
-    finalClass: row.finalClass,
+    declaredClass: row.declaredClassName,
+    finalClass: row.finalClassName,
     car: `${row.year} ${row.make} ${row.model}`,
     drivers: [row.driverName, row.coDriverName].filter(Boolean).join(" & "),
     status: row.status,

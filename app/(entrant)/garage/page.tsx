@@ -47,6 +47,14 @@ export default async function GaragePage() {
                 <div className="flex items-center gap-3">
                   <VerdictBadge status={e.status} toClass={e.finalClass} />
                   <Link
+                    href={`/entries/${e.entryId}`}
+                    className="btn-secondary min-w-touch"
+                    data-testid="entry-result-link"
+                    aria-label={`Result for car ${e.carNumber}, ${e.eventName}`}
+                  >
+                    Result
+                  </Link>
+                  <Link
                     href={`/entries/${e.entryId}/pass`}
                     className="btn-secondary min-w-touch"
                     data-testid="entry-pass-link"
@@ -55,9 +63,6 @@ export default async function GaragePage() {
                     Pass
                   </Link>
                 </div>
-                <Link href={`/entries/${e.entryId}`} className="sr-only">
-                  Entry {e.carNumber}
-                </Link>
               </li>
             ))}
           </ul>

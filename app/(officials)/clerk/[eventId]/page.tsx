@@ -20,7 +20,7 @@ export default async function ClerkPage({ params }: { params: Promise<{ eventId:
     .map(toEntryListRow);
   const byClass = new Map<string, number>();
   for (const row of cleared) {
-    const cls = row.finalClass ?? row.declaredClass;
+    const cls = row.finalClass ?? row.declaredClass; // display names (toEntryListRow)
     byClass.set(cls, (byClass.get(cls) ?? 0) + 1);
   }
   return (

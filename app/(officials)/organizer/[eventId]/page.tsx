@@ -23,7 +23,7 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
   ]);
   const byClass = new Map<string, number>();
   for (const row of entries)
-    byClass.set(row.declaredClass, (byClass.get(row.declaredClass) ?? 0) + 1);
+    byClass.set(row.declaredClassName, (byClass.get(row.declaredClassName) ?? 0) + 1);
   const facts: [string, string][] = [
     ["Club", event.clubName],
     ["Venue", `${event.venueName} (${(event.trackLengthM / 1000).toFixed(2)} km)`],

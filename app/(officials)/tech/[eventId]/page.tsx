@@ -10,7 +10,11 @@ export const metadata: Metadata = { title: "Tech line" };
 
 export default async function TechLinePage({ params }: { params: Promise<{ eventId: string }> }) {
   const { eventId } = await params;
-  const { event, roles, user } = await loadEventPage({ eventId, permission: "tech.read", returnTo: `/tech/${eventId}` });
+  const { event, roles, user } = await loadEventPage({
+    eventId,
+    permission: "tech.read",
+    returnTo: `/tech/${eventId}`,
+  });
   const canChief = can(roles, "verdicts.override");
   const pagePaths = [`/tech/${eventId}`, ...(canChief ? [`/tech/${eventId}/chief`] : [])];
   return (
@@ -24,8 +28,8 @@ export default async function TechLinePage({ params }: { params: Promise<{ event
       </EventHeading>
       <div className="space-y-4">
         <Caution title="On the pad">
-          Engine off, car on the level pad, and nobody under a car that is not secured. The verdicts here are
-          computed; the chief scrutineer has the final say.
+          Engine off, car on the level pad, and nobody under a car that is not secured. The verdicts
+          here are computed; the chief scrutineer has the final say.
         </Caution>
         <TechLineApp
           eventId={eventId}

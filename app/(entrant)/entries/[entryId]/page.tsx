@@ -1,0 +1,54 @@
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
+import type { Metadata } from "next";
+import Link from "next/link";
+import { forbidden, notFound } from "next/navigation";
+import { Caution } from "@/components/caution";
+import { EntryResultView } from "@/components/entry-result-view";
+import { requirePageUser } from "@/lib/auth/require-page-permission";
+import { loadEntryResult } from "@/lib/entries/load-entry-result";
+import { AppError } from "@/lib/errors";
+import { idSchema } from "@/lib/http/id-schema";
+import { entryKeys } from "@/lib/query/entry-queries";
+import { getQueryClient } from "@/lib/query/get-query-client";
+
+export const metadata: Metadata = { title: "Your entry" };
+
+export default async function EntryPage({ params }: { params: Promise<{ entryId: string }> }) {
+  const { entryId } = await params;
+  const user = await requirePageUser(`/entries/${entryId}`);
+  if (!idSchema.safeParse(entryId).success) notFound();
+  const result = await loadEntryResult({ entryId, user }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "forbidden") forbidden();
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const queryClient = getQueryClient();
+  queryClient.setQueryData(entryKeys.result(entryId), result);
+  return (
+    <div className="space-y-4">
+      <div className="flex items-start gap-3">
+        <span className="tabular rounded-lg bg-asphalt-950 px-3 py-2 text-4xl font-bold text-asphalt-50">
+          {result.carNumber}
+        </span>
+        <div>
+          <p className="text-base font-semibold uppercase tracking-wider text-accent">Your entry</p>
+          <h1 className="text-2xl font-bold">{result.car}</h1>
+          <p className="text-lg">
+            {result.eventName} · entered in {result.declaredClass} · {result.drivers}
+          </p>
+        </div>
+      </div>
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        <EntryResultView entryId={entryId} />
+      </HydrationBoundary>
+      <Link href={`/entries/${entryId}/pass`} className="btn-primary w-full sm:w-auto">
+        Show my pass
+      </Link>
+      <Caution title="The result">
+        Plumbline computes verdicts from the scrutineers&apos; readings and the event&apos;s rules.
+        The chief scrutineer has the final say; if you disagree, ask at the tech line. A held car
+        can be fixed and presented again.
+      </Caution>
+    </div>
+  );
+}

@@ -1,0 +1,19 @@
+import type { VerdictWord } from "../verdict-word";
+
+/** What an entrant sees of their entry's scrutineering result (GET /api/entries/[id]/verdict). */
+export type EntryResult = {
+  entryId: string;
+  eventId: string;
+  eventName: string;
+  carNumber: number;
+  car: string;
+  drivers: string;
+  declaredClass: string;
+  status: VerdictWord;
+  className: string | null;
+  reason: string;
+  /** One line per rule or safety item that decided the verdict (over, unsure or failed first). */
+  lines: { outcome: string; reason: string }[];
+  notice: string | null;
+  computedAt: string | null;
+};

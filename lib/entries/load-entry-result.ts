@@ -1,0 +1,66 @@
+import "server-only";
+import { getEntryVerdict } from "../../db/queries/get-entry-verdict";
+import { getEventRoles } from "../../db/queries/get-event-roles";
+import { isOwnEntry } from "../../db/queries/is-own-entry";
+import type { SessionUser } from "../auth/get-session-user";
+import { can } from "../auth/permissions";
+import { AppError } from "../errors";
+import { classNamesFromRuleSet } from "../passes/class-names-from-rule-set";
+import type { Verdict } from "../scrutineer/verdict-schema";
+import type { EntryResult } from "./entry-result";
+
+/**
+ * An entry's result for a person allowed to see it: its driver, co-driver or car owner, or an
+ * official of the event who may read entries. Everyone else gets 403, an unknown entry 404.
+ */
+export async function loadEntryResult({
+  entryId,
+  user,
+}: {
+  entryId: string;
+  user: SessionUser;
+}): Promise<EntryResult> {
+  const row = await getEntryVerdict({ entryId });
+  if (!row) throw new AppError("not_found", "No such entry.");
+  const [own, roles] = await Promise.all([
+    isOwnEntry({ entryId, userId: user.id }),
+    getEventRoles({ eventId: row.eventId, userId: user.id }),
+  ]);
+  if (!(own && can(roles, "own-entries.read")) && !can(roles, "entries.read")) {
+    throw new AppError("forbidden", "This entry is not yours to see.");
+  }
+  const verdict = (row.result ?? null) as Verdict | null;
+  const names = classNamesFromRuleSet(row.ruleSetBody);
+  const className = (id: string | null) => (id ? (names[id] ?? id) : null);
+  const order: Record<string, number> = {
+    fail: 0,
+    inconclusive: 1,
+    waiting: 2,
+    pass: 3,
+    "not-applicable": 4,
+  };
+  const check = verdict?.classChecks.find((c) => c.classId === verdict.declaredClassId);
+  const lines = [
+    ...(check?.rules ?? []),
+    ...(verdict?.eventRules ?? []),
+    ...(verdict?.safety ?? []),
+  ]
+    .filter((r) => r.outcome !== "not-applicable")
+    .map((r) => ({ outcome: r.outcome, reason: r.reason }))
+    .sort((a, b) => (order[a.outcome] ?? 9) - (order[b.outcome] ?? 9));
+  return {
+    entryId: row.entryId,
+    eventId: row.eventId,
+    eventName: row.eventName,
+    carNumber: row.carNumber,
+    car: `${row.year} ${row.make} ${row.model}`,
+    drivers: [row.driverName, row.coDriverName].filter(Boolean).join(" & "),
+    declaredClass: className(row.declaredClass) ?? row.declaredClass,
+    status: row.status ?? "waiting",
+    className: className(row.finalClass),
+    reason: row.reason ?? "Not scrutineered yet. Bring the car and your pass to the tech line.",
+    lines,
+    notice: verdict?.notice ?? null,
+    computedAt: row.computedAt ? row.computedAt.toISOString() : null,
+  };
+}

@@ -1,0 +1,17 @@
+import { queryOptions } from "@tanstack/react-query";
+import type { EntryResult } from "../entries/entry-result";
+import { fetchJson } from "./fetch-json";
+
+export const entryKeys = {
+  all: ["entries"] as const,
+  result: (entryId: string) => [...entryKeys.all, entryId, "result"] as const,
+};
+
+/** An entry's result, refreshed every 20 s so a verdict posted from the tech line shows up. */
+export const entryResultQuery = (entryId: string) =>
+  queryOptions({
+    queryKey: entryKeys.result(entryId),
+    queryFn: () => fetchJson<EntryResult>(`/api/entries/${entryId}/verdict`),
+    refetchInterval: 20_000,
+    refetchOnWindowFocus: true,
+  });
