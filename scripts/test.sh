@@ -34,14 +34,6 @@ say "integration tests (MariaDB + the built app)"
 node_modules/.bin/vitest run --project integration
 
 say "browser tests (Playwright, Debian Chromium)"
-E2E_DB="$(node_modules/.bin/tsx scripts/e2e-database.ts create)"
-trap 'node_modules/.bin/tsx scripts/e2e-database.ts drop "$E2E_DB" || true' EXIT
-export PLUMBLINE_E2E_APP_PORT="${PLUMBLINE_E2E_APP_PORT:-3300}"
-export DATABASE_URL="$E2E_DB"
-export APP_URL="http://127.0.0.1:$PLUMBLINE_E2E_APP_PORT"
-export SMTP_PORT=2725 MAILBOX_URL=http://127.0.0.1:2780 S3_ENDPOINT=http://127.0.0.1:4768
-export PLUMBLINE_SERVICES_DIR="$ROOT/.data/test-services/e2e"
-rm -rf "$PLUMBLINE_SERVICES_DIR"
-node_modules/.bin/playwright test
+bash scripts/e2e.sh
 
 say "all suites passed in $((SECONDS - started)) s"

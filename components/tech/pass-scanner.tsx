@@ -32,7 +32,9 @@ export function PassScanner({
       try {
         await instance.start(
           { facingMode: "environment" },
-          { fps: 10, qrbox: { width: 240, height: 240 } },
+          // Decode the whole frame at the camera's resolution: a pass QR is dense (about 113
+          // modules), and a guide box would scale it down to the box's on-screen size first.
+          { fps: 10 },
           (text) => {
             if (done.current) return;
             done.current = true;
@@ -62,10 +64,12 @@ export function PassScanner({
   return (
     <div className="card space-y-3" data-testid="pass-scanner">
       <p className="text-lg font-semibold">Point the camera at the pass</p>
-      <div
-        id={elementId}
-        className="mx-auto w-full max-w-sm overflow-hidden rounded-lg bg-asphalt-900"
-      />
+      {/* html5-qrcode decodes from a canvas the size of its element on screen. A pass QR is dense,
+          so the element is laid out at twice the width and shown at half scale: the camera image
+          is decoded at twice the resolution it is displayed at. */}
+      <div className="mx-auto aspect-[4/3] w-full max-w-sm overflow-hidden rounded-lg bg-asphalt-900">
+        <div id={elementId} className="w-[200%] origin-top-left scale-50" />
+      </div>
       {problem ? (
         <p className="field-error" role="alert">
           {problem}
