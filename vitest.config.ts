@@ -17,7 +17,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "unit",
-          include: ["tests/**/*.test.ts"],
+          include: ["tests/**/*.test.ts", "tests/**/*.test.tsx"],
           exclude: ["tests/**/*.integration.test.ts"],
           environment: "node",
         },
