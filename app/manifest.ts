@@ -5,7 +5,8 @@ export default function manifest(): MetadataRoute.Manifest {
   return {
     name: "Plumbline — scrutineering and run groups",
     short_name: "Plumbline",
-    description: "The tech line, class checks and run sheet for club time-attack days, offline on the pad.",
+    description:
+      "The tech line, class checks and run sheet for club time-attack days, offline on the pad.",
     start_url: "/home",
     scope: "/",
     display: "standalone",
@@ -15,7 +16,12 @@ export default function manifest(): MetadataRoute.Manifest {
     icons: [
       { src: "/icons/icon-192.png", sizes: "192x192", type: "image/png", purpose: "any" },
       { src: "/icons/icon-512.png", sizes: "512x512", type: "image/png", purpose: "any" },
-      { src: "/icons/icon-maskable-512.png", sizes: "512x512", type: "image/png", purpose: "maskable" },
+      {
+        src: "/icons/icon-maskable-512.png",
+        sizes: "512x512",
+        type: "image/png",
+        purpose: "maskable",
+      },
     ],
   };
 }

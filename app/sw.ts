@@ -11,7 +11,9 @@ declare global {
   }
 }
 
-declare const self: ServiceWorkerGlobalScope & { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
+declare const self: ServiceWorkerGlobalScope & {
+  __SW_MANIFEST: (PrecacheEntry | string)[] | undefined;
+};
 
 type SyncEvent = ExtendableEvent & { tag: string };
 
@@ -25,7 +27,9 @@ const serwist = new Serwist({
       // Pages people open on the pad (tech line, passes, entries): network first, the saved copy
       // when there is no signal. "Prepare for offline" puts the tech line's pages in this cache.
       matcher: ({ request, sameOrigin, url }) =>
-        sameOrigin && request.mode === "navigate" && /^\/(tech|entries|p|board)\//.test(url.pathname),
+        sameOrigin &&
+        request.mode === "navigate" &&
+        /^\/(tech|entries|p|board)\//.test(url.pathname),
       handler: new NetworkFirst({
         cacheName: TECH_PAGES_CACHE,
         networkTimeoutSeconds: 4,
@@ -34,7 +38,10 @@ const serwist = new Serwist({
       }),
     },
     // Data lives in IndexedDB (lib/offline), never in the HTTP cache.
-    { matcher: ({ sameOrigin, url }) => sameOrigin && url.pathname.startsWith("/api/"), handler: new NetworkOnly() },
+    {
+      matcher: ({ sameOrigin, url }) => sameOrigin && url.pathname.startsWith("/api/"),
+      handler: new NetworkOnly(),
+    },
     ...defaultCache,
   ],
   fallbacks: {
@@ -45,7 +52,8 @@ const serwist = new Serwist({
 // Background Sync: the browser wakes us when the phone is back online, even with the tab closed.
 self.addEventListener("sync", (event) => {
   const sync = event as SyncEvent;
-  if (sync.tag === OUTBOX_SYNC_TAG) sync.waitUntil(drainOutbox({ now: () => Date.now() }).then(() => undefined));
+  if (sync.tag === OUTBOX_SYNC_TAG)
+    sync.waitUntil(drainOutbox({ now: () => Date.now() }).then(() => undefined));
 });
 
 serwist.addEventListeners();

@@ -9,11 +9,21 @@ const order: VerdictWord[] = ["cleared", "moved-up", "re-measure", "held", "wait
 /** The tech board for everyone: cars grouped by verdict state, updating by itself. */
 export function TechBoard({ eventId }: { eventId: string }) {
   const { data, isError, dataUpdatedAt } = useQuery(boardQuery(eventId));
-  if (!data) return <p className="card">{isError ? "The board cannot be reached right now." : "Loading the board…"}</p>;
+  if (!data)
+    return (
+      <p className="card">
+        {isError ? "The board cannot be reached right now." : "Loading the board…"}
+      </p>
+    );
   return (
     <div className="space-y-6" data-testid="tech-board">
       <p className="text-base text-asphalt-700" aria-live="polite">
-        Updated {new Date(dataUpdatedAt).toLocaleTimeString("en-GB", { hour: "2-digit", minute: "2-digit", second: "2-digit" })}
+        Updated{" "}
+        {new Date(dataUpdatedAt).toLocaleTimeString("en-GB", {
+          hour: "2-digit",
+          minute: "2-digit",
+          second: "2-digit",
+        })}
         {isError ? " · cannot reach the server, showing the last board" : ""}
       </p>
       {order.map((status) => {
@@ -26,8 +36,14 @@ export function TechBoard({ eventId }: { eventId: string }) {
             </h2>
             <ul className="grid grid-cols-3 gap-2 sm:grid-cols-6 lg:grid-cols-8">
               {cars.map((car) => (
-                <li key={car.carNumber} className="card p-2 text-center" data-car-number={car.carNumber}>
-                  <span className="tabular block font-narrow text-4xl font-bold">{car.carNumber}</span>
+                <li
+                  key={car.carNumber}
+                  className="card p-2 text-center"
+                  data-car-number={car.carNumber}
+                >
+                  <span className="tabular block font-narrow text-4xl font-bold">
+                    {car.carNumber}
+                  </span>
                   <span className="block text-base">{car.finalClass ?? car.declaredClass}</span>
                 </li>
               ))}

@@ -8,8 +8,9 @@ export default function OfflinePage() {
     <div className="card space-y-3">
       <h1 className="text-3xl font-bold">No signal</h1>
       <p>
-        This page was not saved on this phone. Pages saved with <strong>Prepare for offline</strong> on
-        the tech line still open, and everything you recorded is kept on the phone until it can be sent.
+        This page was not saved on this phone. Pages saved with <strong>Prepare for offline</strong>{" "}
+        on the tech line still open, and everything you recorded is kept on the phone until it can
+        be sent.
       </p>
     </div>
   );

@@ -17,7 +17,11 @@ export type EventRuleContext = {
 };
 
 /** The event's date, units and its pinned rule set (validated), or null for an unknown event. */
-export async function getEventRuleSet({ eventId }: { eventId: string }): Promise<EventRuleContext | null> {
+export async function getEventRuleSet({
+  eventId,
+}: {
+  eventId: string;
+}): Promise<EventRuleContext | null> {
   const [row] = await getDb()
     .select({
       eventDate: events.eventDate,

@@ -1,7 +1,7 @@
 import "server-only";
 import { inArray } from "drizzle-orm";
-import { stableStringify } from "../../lib/scrutineer/stable-stringify";
 import type { TechRecord } from "../../lib/scrutineer/record-schema";
+import { stableStringify } from "../../lib/scrutineer/stable-stringify";
 import { getDb } from "../client";
 import { records } from "../schema";
 
@@ -27,7 +27,12 @@ export async function insertRecords({
     const existing = await tx
       .select()
       .from(records)
-      .where(inArray(records.id, batch.map((r) => r.id)))
+      .where(
+        inArray(
+          records.id,
+          batch.map((r) => r.id),
+        ),
+      )
       .for("update");
     const byId = new Map(existing.map((row) => [row.id, row]));
     const fresh: (typeof records.$inferInsert)[] = [];

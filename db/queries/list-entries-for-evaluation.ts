@@ -13,7 +13,11 @@ export async function listEntriesForEvaluation({
 }) {
   if (entryIds && entryIds.length === 0) return [];
   return getDb()
-    .select({ entryId: entries.id, declaredClassId: entries.declaredClass, declarations: entries.declarations })
+    .select({
+      entryId: entries.id,
+      declaredClassId: entries.declaredClass,
+      declarations: entries.declarations,
+    })
     .from(entries)
     .where(
       entryIds

@@ -7,7 +7,13 @@ import { entries, events, users } from "../schema";
 const coDriver = alias(users, "co_driver");
 
 /** Who to tell about an entry: driver and co-driver e-mails, with the car number and event. */
-export async function listEntryContacts({ eventId, entryIds }: { eventId: string; entryIds: string[] }) {
+export async function listEntryContacts({
+  eventId,
+  entryIds,
+}: {
+  eventId: string;
+  entryIds: string[];
+}) {
   if (entryIds.length === 0) return [];
   return getDb()
     .select({

@@ -4,7 +4,13 @@ import { getDb } from "../client";
 import { entries } from "../schema";
 
 /** Which of these ids are entries of the event. */
-export async function listEventEntryIds({ eventId, entryIds }: { eventId: string; entryIds: string[] }) {
+export async function listEventEntryIds({
+  eventId,
+  entryIds,
+}: {
+  eventId: string;
+  entryIds: string[];
+}) {
   if (entryIds.length === 0) return new Set<string>();
   const rows = await getDb()
     .select({ id: entries.id })

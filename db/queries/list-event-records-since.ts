@@ -15,7 +15,11 @@ export async function listEventRecordsSince({
   const rows = await getDb()
     .select()
     .from(records)
-    .where(since ? and(eq(records.eventId, eventId), gt(records.receivedAt, since)) : eq(records.eventId, eventId))
+    .where(
+      since
+        ? and(eq(records.eventId, eventId), gt(records.receivedAt, since))
+        : eq(records.eventId, eventId),
+    )
     .orderBy(asc(records.receivedAt), asc(records.id));
   return rows.map(recordRowToRecord);
 }

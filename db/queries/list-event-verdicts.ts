@@ -23,7 +23,9 @@ export async function listEventVerdicts({ eventId }: { eventId: string }) {
     classId: r.classId,
     reason: r.reason,
     needsChief: r.needsChief,
-    flags: ((r.result as { flags?: string[] } | null)?.flags ?? []).filter((f) => typeof f === "string"),
+    flags: ((r.result as { flags?: string[] } | null)?.flags ?? []).filter(
+      (f) => typeof f === "string",
+    ),
     computedAt: r.computedAt.toISOString(),
   }));
 }

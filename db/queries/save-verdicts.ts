@@ -33,9 +33,21 @@ export async function saveVerdicts({
   if (rows.length === 0) return before;
   await getDb().transaction(async (tx) => {
     const previous = await tx
-      .select({ entryId: verdicts.entryId, status: verdicts.status, finalClass: verdicts.finalClass })
+      .select({
+        entryId: verdicts.entryId,
+        status: verdicts.status,
+        finalClass: verdicts.finalClass,
+      })
       .from(verdicts)
-      .where(and(eq(verdicts.eventId, eventId), inArray(verdicts.entryId, rows.map((r) => r.entryId))))
+      .where(
+        and(
+          eq(verdicts.eventId, eventId),
+          inArray(
+            verdicts.entryId,
+            rows.map((r) => r.entryId),
+          ),
+        ),
+      )
       .for("update");
     for (const row of rows) before.set(row.entryId, null);
     for (const p of previous) before.set(p.entryId, { status: p.status, finalClass: p.finalClass });

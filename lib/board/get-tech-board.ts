@@ -6,14 +6,21 @@ import { AppError } from "../errors";
 import type { Board } from "./board-schema";
 
 /** The public tech board of an event: every car's number, class and verdict state. */
-export async function getTechBoard({ eventId, now }: { eventId: string; now: Date }): Promise<Board> {
+export async function getTechBoard({
+  eventId,
+  now,
+}: {
+  eventId: string;
+  now: Date;
+}): Promise<Board> {
   const [summary, context, rows] = await Promise.all([
     getEventSummary({ eventId }),
     getEventRuleSet({ eventId }),
     listEventEntries({ eventId }),
   ]);
   if (!summary || !context) throw new AppError("not_found", "No such event.");
-  const name = (id: string | null) => (id ? (context.ruleSet.classes.find((c) => c.id === id)?.name ?? id) : null);
+  const name = (id: string | null) =>
+    id ? (context.ruleSet.classes.find((c) => c.id === id)?.name ?? id) : null;
   return {
     eventName: summary.name,
     updatedAt: now.toISOString(),

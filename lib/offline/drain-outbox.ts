@@ -1,17 +1,26 @@
-import { saveServerVerdicts } from "./save-event-pack";
 import { announceChange } from "./announce-change";
 import { backoffDelayMs } from "./backoff-delay";
 import type { PackVerdict } from "./event-pack-schema";
 import { listLocalRecords } from "./list-local-records";
 import { isPending, type LocalRecord } from "./local-record";
 import { OUTBOX_LOCK, SYNC_BATCH_SIZE } from "./outbox-constants";
+import { saveServerVerdicts } from "./save-event-pack";
 import { updateLocalRecord } from "./update-local-record";
 import { uploadPhoto } from "./upload-photo";
 
-export type DrainSummary = { ran: boolean; sent: number; refused: number; waiting: number; signedOut: boolean };
+export type DrainSummary = {
+  ran: boolean;
+  sent: number;
+  refused: number;
+  waiting: number;
+  signedOut: boolean;
+};
 
 type SyncAnswer = {
-  results: ({ id: string; status: "stored" | "duplicate" } | { id: string | null; status: "refused"; reason: string })[];
+  results: (
+    | { id: string; status: "stored" | "duplicate" }
+    | { id: string | null; status: "refused"; reason: string }
+  )[];
   verdicts: PackVerdict[];
 };
 
@@ -29,7 +38,10 @@ type Options = {
  * sign-in keeps the queue until the scrutineer signs in again. Nothing is dropped.
  */
 export async function drainOutbox(options: Options): Promise<DrainSummary> {
-  const locks = typeof navigator !== "undefined" ? (navigator as Navigator & { locks?: LockManager }).locks : undefined;
+  const locks =
+    typeof navigator !== "undefined"
+      ? (navigator as Navigator & { locks?: LockManager }).locks
+      : undefined;
   if (!locks) return run(options);
   const result = await locks.request(OUTBOX_LOCK, { ifAvailable: true }, (lock) =>
     lock ? run(options) : Promise.resolve<DrainSummary | null>(null),
@@ -37,7 +49,12 @@ export async function drainOutbox(options: Options): Promise<DrainSummary> {
   return result ?? { ran: false, sent: 0, refused: 0, waiting: 0, signedOut: false };
 }
 
-async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }: Options): Promise<DrainSummary> {
+async function run({
+  now,
+  random = Math.random,
+  fetchImpl = fetch,
+  onProgress,
+}: Options): Promise<DrainSummary> {
   const due = (await listLocalRecords()).filter((r) => isPending(r) && r.nextAttemptAt <= now());
   const summary: DrainSummary = { ran: true, sent: 0, refused: 0, waiting: 0, signedOut: false };
   const total = due.length;
@@ -59,7 +76,11 @@ async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }:
   };
   const holdForSignIn = async (items: LocalRecord[]) => {
     for (const item of items) {
-      await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "needs-sign-in", lastError: "Sign in again to send." }));
+      await updateLocalRecord(item.record.id, (r) => ({
+        ...r,
+        state: "needs-sign-in",
+        lastError: "Sign in again to send.",
+      }));
     }
     summary.signedOut = true;
     summary.waiting += items.length;
@@ -91,7 +112,8 @@ async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }:
 
     for (let start = 0; start < ready.length; start += SYNC_BATCH_SIZE) {
       const batch = ready.slice(start, start + SYNC_BATCH_SIZE);
-      for (const item of batch) await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "sending" }));
+      for (const item of batch)
+        await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "sending" }));
       announceChange({ type: "records", eventId });
       let response: Response;
       try {
@@ -99,7 +121,10 @@ async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }:
           method: "POST",
           headers: { "content-type": "application/json" },
           credentials: "same-origin",
-          body: JSON.stringify({ deviceId: batch[0]?.record.deviceId ?? "unknown", records: batch.map((b) => b.record) }),
+          body: JSON.stringify({
+            deviceId: batch[0]?.record.deviceId ?? "unknown",
+            records: batch.map((b) => b.record),
+          }),
         });
       } catch {
         await later(ready.slice(start), "No signal; will try again.");
@@ -109,11 +134,16 @@ async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }:
         await holdForSignIn(ready.slice(start));
         break;
       }
-      if (!response.ok && (response.status >= 500 || response.status === 408 || response.status === 429)) {
+      if (
+        !response.ok &&
+        (response.status >= 500 || response.status === 408 || response.status === 429)
+      ) {
         await later(ready.slice(start), `The server answered ${response.status}; will try again.`);
         break;
       }
-      const body = (await response.json().catch(() => null)) as (SyncAnswer & { error?: { message?: string } }) | null;
+      const body = (await response.json().catch(() => null)) as
+        | (SyncAnswer & { error?: { message?: string } })
+        | null;
       if (!response.ok || !body?.results) {
         const reason = body?.error?.message ?? `The server refused the batch (${response.status}).`;
         for (const item of batch) await refuse(item, reason);
@@ -127,7 +157,12 @@ async function run({ now, random = Math.random, fetchImpl = fetch, onProgress }:
         } else if (result.status === "refused") {
           await refuse(item, result.reason);
         } else {
-          await updateLocalRecord(item.record.id, (r) => ({ ...r, state: result.status === "duplicate" ? "duplicate" : "sent", sentAt: now(), lastError: null }));
+          await updateLocalRecord(item.record.id, (r) => ({
+            ...r,
+            state: result.status === "duplicate" ? "duplicate" : "sent",
+            sentAt: now(),
+            lastError: null,
+          }));
           summary.sent += 1;
         }
       }

@@ -10,7 +10,10 @@ export type FetchPackResult =
  * Fetch the event pack and store it. With a stored pack, ask only for what changed (ETag and the
  * records cursor); without signal, keep what the phone has.
  */
-export async function fetchEventPack(eventId: string, now: () => Date = () => new Date()): Promise<FetchPackResult> {
+export async function fetchEventPack(
+  eventId: string,
+  now: () => Date = () => new Date(),
+): Promise<FetchPackResult> {
   const stored = await loadEventPack(eventId);
   const url = new URL(`/api/events/${eventId}/pack`, self.location.origin);
   if (stored?.recordsCursor) url.searchParams.set("since", stored.recordsCursor);
@@ -22,14 +25,26 @@ export async function fetchEventPack(eventId: string, now: () => Date = () => ne
       cache: "no-store",
     });
   } catch {
-    return { kind: "offline", pack: stored, message: "No signal: using the event pack saved on this phone." };
+    return {
+      kind: "offline",
+      pack: stored,
+      message: "No signal: using the event pack saved on this phone.",
+    };
   }
   if (response.status === 304 && stored) return { kind: "unchanged", pack: stored, message: null };
   if (response.status === 401) {
-    return { kind: "signed-out", pack: stored, message: "Sign in again to refresh the event pack." };
+    return {
+      kind: "signed-out",
+      pack: stored,
+      message: "Sign in again to refresh the event pack.",
+    };
   }
   if (!response.ok) {
-    return { kind: "error", pack: stored, message: `The server answered ${response.status}; kept the saved pack.` };
+    return {
+      kind: "error",
+      pack: stored,
+      message: `The server answered ${response.status}; kept the saved pack.`,
+    };
   }
   const pack = eventPackSchema.parse(await response.json());
   return { kind: "fresh", pack: await saveEventPack(pack, now()), message: null };

@@ -6,7 +6,13 @@ import type { TechRecord } from "../scrutineer/record-schema";
  * had it) · refused (the server said why; kept, never dropped) · needs-sign-in (kept until the
  * scrutineer signs in again).
  */
-export type LocalRecordState = "queued" | "sending" | "sent" | "duplicate" | "refused" | "needs-sign-in";
+export type LocalRecordState =
+  | "queued"
+  | "sending"
+  | "sent"
+  | "duplicate"
+  | "refused"
+  | "needs-sign-in";
 
 export type LocalRecord = {
   record: TechRecord;

@@ -6,7 +6,11 @@ import type { LocalRecord } from "./local-record";
  * An entry's records as this phone knows them: the server's (from the pack) united with its own,
  * by id. Records the server refused are left out of the preview (they stay listed in the outbox).
  */
-export function mergeEntryRecords(entryId: string, packRecords: PackRecord[], local: LocalRecord[]): TechRecord[] {
+export function mergeEntryRecords(
+  entryId: string,
+  packRecords: PackRecord[],
+  local: LocalRecord[],
+): TechRecord[] {
   const byId = new Map<string, TechRecord>();
   for (const raw of packRecords) {
     if (raw.entryId !== entryId) continue;

@@ -8,7 +8,10 @@ export type PrepareResult = { pack: FetchPackResult; pagesSaved: number; persist
  * IndexedDB, save the tech line's pages in the service worker's cache, and ask the browser to keep
  * this site's storage.
  */
-export async function prepareForOffline(eventId: string, pagePaths: string[]): Promise<PrepareResult> {
+export async function prepareForOffline(
+  eventId: string,
+  pagePaths: string[],
+): Promise<PrepareResult> {
   const pack = await fetchEventPack(eventId);
   let pagesSaved = 0;
   if (typeof caches !== "undefined") {
@@ -25,6 +28,9 @@ export async function prepareForOffline(eventId: string, pagePaths: string[]): P
       }
     }
   }
-  const persisted = typeof navigator !== "undefined" && navigator.storage?.persist ? await navigator.storage.persist() : false;
+  const persisted =
+    typeof navigator !== "undefined" && navigator.storage?.persist
+      ? await navigator.storage.persist()
+      : false;
   return { pack, pagesSaved, persisted };
 }

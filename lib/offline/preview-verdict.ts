@@ -21,7 +21,11 @@ export function previewVerdict(opts: {
   if (!opts.ruleSet.classes.some((c) => c.id === opts.entry.declaredClassId)) return null;
   return evaluateEntry({
     ruleSet: opts.ruleSet,
-    entry: { entryId: opts.entry.entryId, declaredClassId: opts.entry.declaredClassId, declarations: declarations.data },
+    entry: {
+      entryId: opts.entry.entryId,
+      declaredClassId: opts.entry.declaredClassId,
+      declarations: declarations.data,
+    },
     records: opts.records,
     eventDate: opts.eventDate,
     display: displayUnits({ length: opts.unitSystem }),

@@ -7,7 +7,9 @@ type SyncManager = { register: (tag: string) => Promise<void> };
 export async function requestBackgroundSync(): Promise<boolean> {
   if (typeof navigator === "undefined" || !("serviceWorker" in navigator)) return false;
   try {
-    const registration = (await navigator.serviceWorker.ready) as ServiceWorkerRegistration & { sync?: SyncManager };
+    const registration = (await navigator.serviceWorker.ready) as ServiceWorkerRegistration & {
+      sync?: SyncManager;
+    };
     if (!registration.sync) return false;
     await registration.sync.register(OUTBOX_SYNC_TAG);
     return true;

@@ -6,7 +6,12 @@ import { updateLocalRecord } from "./update-local-record";
 export async function requeueSignedOutRecords(eventId: string): Promise<number> {
   const held = (await listLocalRecords(eventId)).filter((r) => r.state === "needs-sign-in");
   for (const item of held) {
-    await updateLocalRecord(item.record.id, (r) => ({ ...r, state: "queued", nextAttemptAt: 0, lastError: null }));
+    await updateLocalRecord(item.record.id, (r) => ({
+      ...r,
+      state: "queued",
+      nextAttemptAt: 0,
+      lastError: null,
+    }));
   }
   if (held.length > 0) announceChange({ type: "records", eventId });
   return held.length;

@@ -13,7 +13,12 @@ export async function saveEventPack(pack: EventPack, fetchedAt: Date): Promise<S
   const { packs } = idbStores();
   const previous = pack.partial ? await get<StoredPack>(pack.event.id, packs) : undefined;
   const records = previous ? mergeById(previous.records, pack.records) : pack.records;
-  const stored: StoredPack = { ...pack, records, partial: false, fetchedAt: fetchedAt.toISOString() };
+  const stored: StoredPack = {
+    ...pack,
+    records,
+    partial: false,
+    fetchedAt: fetchedAt.toISOString(),
+  };
   await set(pack.event.id, stored, packs);
   announceChange({ type: "pack", eventId: pack.event.id });
   return stored;

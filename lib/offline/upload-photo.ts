@@ -5,7 +5,10 @@ import type { LocalRecord } from "./local-record";
 export type UploadOutcome = "uploaded" | "signed-out" | "retry" | { refused: string };
 
 /** Send one photo's image to the server (which puts it in object storage). Idempotent by key. */
-export async function uploadPhoto(item: LocalRecord, fetchImpl: typeof fetch): Promise<UploadOutcome> {
+export async function uploadPhoto(
+  item: LocalRecord,
+  fetchImpl: typeof fetch,
+): Promise<UploadOutcome> {
   if (item.record.kind !== "photo") return "uploaded";
   const blob = await get<Blob>(item.record.id, idbStores().blobs);
   if (!blob) return { refused: "The photo's image is missing from this phone." };
@@ -16,7 +19,11 @@ export async function uploadPhoto(item: LocalRecord, fetchImpl: typeof fetch): P
   form.set("file", blob, "photo.jpg");
   let response: Response;
   try {
-    response = await fetchImpl(`/api/events/${item.eventId}/uploads`, { method: "POST", body: form, credentials: "same-origin" });
+    response = await fetchImpl(`/api/events/${item.eventId}/uploads`, {
+      method: "POST",
+      body: form,
+      credentials: "same-origin",
+    });
   } catch {
     return "retry";
   }

@@ -21,8 +21,19 @@ const CURSOR_SAFETY_MS = 10_000;
  * Everything the tech line needs offline for one event. With `since`, only records received
  * after it (a partial pack the phone merges). The ETag covers the whole pack's content.
  */
-export async function buildEventPack({ eventId, since, now }: { eventId: string; since: Date | null; now: Date }): Promise<EventPack> {
-  const [summary, context] = await Promise.all([getEventSummary({ eventId }), getEventRuleSet({ eventId })]);
+export async function buildEventPack({
+  eventId,
+  since,
+  now,
+}: {
+  eventId: string;
+  since: Date | null;
+  now: Date;
+}): Promise<EventPack> {
+  const [summary, context] = await Promise.all([
+    getEventSummary({ eventId }),
+    getEventRuleSet({ eventId }),
+  ]);
   if (!summary || !context) throw new AppError("not_found", "No such event.");
   await ensureEventPassKey({ eventId });
   const [entries, officials, passKeys, revokedPassIds, verdicts, allRecords] = await Promise.all([
@@ -35,7 +46,9 @@ export async function buildEventPack({ eventId, since, now }: { eventId: string;
   ]);
   const last = allRecords.at(-1)?.receivedAt ?? null;
   const recordsCursor = last ? new Date(Date.parse(last) - CURSOR_SAFETY_MS).toISOString() : null;
-  const records = since ? allRecords.filter((r) => Date.parse(r.receivedAt) > since.getTime()) : allRecords;
+  const records = since
+    ? allRecords.filter((r) => Date.parse(r.receivedAt) > since.getTime())
+    : allRecords;
   const etag = createHash("sha256")
     .update(
       JSON.stringify({
@@ -66,7 +79,11 @@ export async function buildEventPack({ eventId, since, now }: { eventId: string;
     ruleSet: context.ruleSet,
     ruleSetVersionId: context.ruleSetVersionId,
     entries,
-    officials: [...new Map(officials.map((o) => [o.userId, { userId: o.userId, name: o.name ?? o.email }])).values()],
+    officials: [
+      ...new Map(
+        officials.map((o) => [o.userId, { userId: o.userId, name: o.name ?? o.email }]),
+      ).values(),
+    ],
     passKeys,
     revokedPassIds,
     verdicts,

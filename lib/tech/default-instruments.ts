@@ -8,10 +8,20 @@
 export const defaultInstruments = [
   { id: "tape-class-2", name: "Steel tape (class II)", standardUncertainty: 0.5, unit: "mm" },
   { id: "height-gauge", name: "Height gauge", standardUncertainty: 0.3, unit: "mm" },
-  { id: "plumb-and-tape", name: "Plumb bob, floor marks and tape", standardUncertainty: 1.5, unit: "mm" },
+  {
+    id: "plumb-and-tape",
+    name: "Plumb bob, floor marks and tape",
+    standardUncertainty: 1.5,
+    unit: "mm",
+  },
   { id: "laser-and-tape", name: "Cross-line laser and tape", standardUncertainty: 1.0, unit: "mm" },
   { id: "corner-scales", name: "Corner scales", standardUncertainty: 0.5, unit: "kg" },
-  { id: "sound-meter-class-1", name: "Sound level meter (class 1)", standardUncertainty: 0.7, unit: "dB(A)" },
+  {
+    id: "sound-meter-class-1",
+    name: "Sound level meter (class 1)",
+    standardUncertainty: 0.7,
+    unit: "dB(A)",
+  },
 ] as const;
 
 export type Instrument = (typeof defaultInstruments)[number];

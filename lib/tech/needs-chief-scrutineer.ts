@@ -7,6 +7,10 @@ import type { Verdict } from "../scrutineer/verdict-schema";
  */
 export function needsChiefScrutineer(verdict: Pick<Verdict, "flags">): boolean {
   return verdict.flags.some(
-    (f) => f === "disagreement" || f === "override-invalid" || f === "unknown-checklist-item" || f === "void-cycle",
+    (f) =>
+      f === "disagreement" ||
+      f === "override-invalid" ||
+      f === "unknown-checklist-item" ||
+      f === "void-cycle",
   );
 }

@@ -26,7 +26,10 @@ export async function notifyVerdictChanges({
   );
   if (changed.length === 0) return 0;
   const contacts = new Map(
-    (await listEntryContacts({ eventId, entryIds: changed.map((c) => c.entryId) })).map((c) => [c.entryId, c]),
+    (await listEntryContacts({ eventId, entryIds: changed.map((c) => c.entryId) })).map((c) => [
+      c.entryId,
+      c,
+    ]),
   );
   let sent = 0;
   for (const change of changed) {
@@ -48,7 +51,11 @@ export async function notifyVerdictChanges({
         await sendMail({ ...mail, to, kind: "verdict", eventId });
         sent += 1;
       } catch (error) {
-        console.error("[mail] verdict mail not sent", to, error instanceof Error ? error.message : error);
+        console.error(
+          "[mail] verdict mail not sent",
+          to,
+          error instanceof Error ? error.message : error,
+        );
       }
     }
   }

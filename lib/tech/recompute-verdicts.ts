@@ -69,5 +69,9 @@ export async function recomputeVerdicts({
       recordCount: verdict.records.total,
     })),
   });
-  return results.map(({ entryId, verdict }) => ({ entryId, before: before.get(entryId) ?? null, verdict }));
+  return results.map(({ entryId, verdict }) => ({
+    entryId,
+    before: before.get(entryId) ?? null,
+    verdict,
+  }));
 }

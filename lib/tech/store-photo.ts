@@ -19,16 +19,23 @@ export async function storePhoto(opts: {
 }): Promise<{ key: string; bytes: number }> {
   const expected = photoStorageKey(opts);
   if (opts.storageKey !== expected) {
-    throw new AppError("invalid_input", "The photo's storage key does not match its record.", { storageKey: [`expected ${expected}`] });
+    throw new AppError("invalid_input", "The photo's storage key does not match its record.", {
+      storageKey: [`expected ${expected}`],
+    });
   }
   if (!opts.file.type.startsWith("image/")) {
-    throw new AppError("invalid_input", "Only images can be attached as photos.", { file: ["Send an image file"] });
+    throw new AppError("invalid_input", "Only images can be attached as photos.", {
+      file: ["Send an image file"],
+    });
   }
   if (opts.file.size === 0 || opts.file.size > MAX_PHOTO_BYTES) {
-    throw new AppError("invalid_input", "The photo is empty or too large.", { file: [`Up to ${MAX_PHOTO_BYTES / 1024 / 1024} MB`] });
+    throw new AppError("invalid_input", "The photo is empty or too large.", {
+      file: [`Up to ${MAX_PHOTO_BYTES / 1024 / 1024} MB`],
+    });
   }
   const known = await listEventEntryIds({ eventId: opts.eventId, entryIds: [opts.entryId] });
-  if (!known.has(opts.entryId)) throw new AppError("not_found", "That car is not entered in this event.");
+  if (!known.has(opts.entryId))
+    throw new AppError("not_found", "That car is not entered in this event.");
   const body = new Uint8Array(await opts.file.arrayBuffer());
   await putObject({ key: expected, body, contentType: opts.file.type });
   await recordUpload({

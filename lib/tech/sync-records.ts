@@ -1,7 +1,7 @@
 import "server-only";
+import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { insertRecords } from "../../db/queries/insert-records";
 import { listEventEntryIds } from "../../db/queries/list-event-entry-ids";
-import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import type { SessionUser } from "../auth/get-session-user";
 import { can } from "../auth/permissions";
 import type { Role } from "../auth/roles";
@@ -39,36 +39,64 @@ export async function syncRecords({
   const candidates: { index: number; record: TechRecord }[] = [];
   rawRecords.forEach((raw, index) => {
     const parsed = recordSchema.safeParse(raw);
-    const id = typeof (raw as { id?: unknown })?.id === "string" ? (raw as { id: string }).id : null;
+    const id =
+      typeof (raw as { id?: unknown })?.id === "string" ? (raw as { id: string }).id : null;
     if (!parsed.success) {
       const issue = parsed.error.issues[0];
       const where = issue?.path.length ? `${issue.path.join(".")}: ` : "";
-      results[index] = { id, status: "refused", reason: `${where}${issue?.message ?? "not a valid record"}` };
+      results[index] = {
+        id,
+        status: "refused",
+        reason: `${where}${issue?.message ?? "not a valid record"}`,
+      };
       return;
     }
     const record = parsed.data;
     if (record.officialId !== user.id) {
-      results[index] = { id, status: "refused", reason: "Made under another official's sign-in; sign in as them to send it." };
+      results[index] = {
+        id,
+        status: "refused",
+        reason: "Made under another official's sign-in; sign in as them to send it.",
+      };
     } else if (!can(roles, recordPermission[record.kind])) {
-      results[index] = { id, status: "refused", reason: `Your role in this event cannot record a ${record.kind}.` };
+      results[index] = {
+        id,
+        status: "refused",
+        reason: `Your role in this event cannot record a ${record.kind}.`,
+      };
     } else {
       candidates.push({ index, record });
     }
   });
 
-  const known = await listEventEntryIds({ eventId, entryIds: [...new Set(candidates.map((c) => c.record.entryId))] });
+  const known = await listEventEntryIds({
+    eventId,
+    entryIds: [...new Set(candidates.map((c) => c.record.entryId))],
+  });
   const accepted = candidates.filter(({ index, record }) => {
     if (known.has(record.entryId)) return true;
-    results[index] = { id: record.id, status: "refused", reason: "That car is not entered in this event." };
+    results[index] = {
+      id: record.id,
+      status: "refused",
+      reason: "That car is not entered in this event.",
+    };
     return false;
   });
 
-  const outcomes = await insertRecords({ eventId, batch: accepted.map((a) => a.record), receivedAt: now });
+  const outcomes = await insertRecords({
+    eventId,
+    batch: accepted.map((a) => a.record),
+    receivedAt: now,
+  });
   const touched = new Set<string>();
   for (const { index, record } of accepted) {
     const outcome = outcomes.get(record.id);
     if (outcome === "conflict") {
-      results[index] = { id: record.id, status: "refused", reason: "This record id was already used for a different record." };
+      results[index] = {
+        id: record.id,
+        status: "refused",
+        reason: "This record id was already used for a different record.",
+      };
     } else {
       results[index] = { id: record.id, status: outcome === "duplicate" ? "duplicate" : "stored" };
       touched.add(record.entryId);

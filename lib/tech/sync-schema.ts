@@ -23,4 +23,8 @@ export type SyncVerdict = {
   computedAt: string;
 };
 
-export type SyncResponse = { results: SyncRecordResult[]; verdicts: SyncVerdict[]; receivedAt: string };
+export type SyncResponse = {
+  results: SyncRecordResult[];
+  verdicts: SyncVerdict[];
+  receivedAt: string;
+};

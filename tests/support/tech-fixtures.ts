@@ -6,14 +6,28 @@ export async function techFixtures(databaseUrl: string) {
   const [event] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events limit 1");
   if (!event) throw new Error("no event in the test database");
   const entryByNumber = async (carNumber: number) => {
-    const [row] = await queryTestDb<{ id: string }>(databaseUrl, "select id from entries where event_id = ? and car_number = ?", [event.id, carNumber]);
+    const [row] = await queryTestDb<{ id: string }>(
+      databaseUrl,
+      "select id from entries where event_id = ? and car_number = ?",
+      [event.id, carNumber],
+    );
     if (!row) throw new Error(`no car ${carNumber}`);
     return row.id;
   };
   const entryNumbers = async () =>
-    (await queryTestDb<{ id: string; car_number: number }>(databaseUrl, "select id, car_number from entries where event_id = ? order by car_number", [event.id])).map((r) => ({ id: r.id, carNumber: r.car_number }));
+    (
+      await queryTestDb<{ id: string; car_number: number }>(
+        databaseUrl,
+        "select id, car_number from entries where event_id = ? order by car_number",
+        [event.id],
+      )
+    ).map((r) => ({ id: r.id, carNumber: r.car_number }));
   const userId = async (email: string) => {
-    const [row] = await queryTestDb<{ id: string }>(databaseUrl, "select id from users where email = ?", [email]);
+    const [row] = await queryTestDb<{ id: string }>(
+      databaseUrl,
+      "select id from users where email = ?",
+      [email],
+    );
     if (!row) throw new Error(`no user ${email}`);
     return row.id;
   };
@@ -41,7 +55,11 @@ export function readingRecord(opts: {
     payload: {
       dimension: opts.dimension,
       value: opts.valueMm,
-      instrument: { id: "tape", name: "Steel tape", standardUncertainty: opts.uncertaintyMm ?? 0.5 },
+      instrument: {
+        id: "tape",
+        name: "Steel tape",
+        standardUncertainty: opts.uncertaintyMm ?? 0.5,
+      },
       conditions: { levelPad: true },
     },
   };
@@ -50,6 +68,10 @@ export function readingRecord(opts: {
 /** Count stored records with these ids. */
 export async function countRecords(databaseUrl: string, ids: string[]): Promise<number> {
   if (ids.length === 0) return 0;
-  const rows = await queryTestDb<{ n: number }>(databaseUrl, `select count(*) as n from records where id in (${ids.map(() => "?").join(",")})`, ids);
+  const rows = await queryTestDb<{ n: number }>(
+    databaseUrl,
+    `select count(*) as n from records where id in (${ids.map(() => "?").join(",")})`,
+    ids,
+  );
   return Number(rows[0]?.n ?? 0);
 }

@@ -17,7 +17,14 @@ describe("a sync interrupted by the server stopping", () => {
     const batches = Array.from({ length: 12 }, (_, b) =>
       Array.from({ length: 40 }, (_, i) => {
         const entry = entries[(b * 40 + i) % entries.length];
-        return readingRecord({ entryId: entry?.id ?? "", officialId, deviceId: "phone-c", dimension: "roofPeakFromGroundMm", valueMm: 1300 + (i % 5) * 0.1, at: new Date(Date.now() + b * 100 + i) });
+        return readingRecord({
+          entryId: entry?.id ?? "",
+          officialId,
+          deviceId: "phone-c",
+          dimension: "roofPeakFromGroundMm",
+          valueMm: 1300 + (i % 5) * 0.1,
+          at: new Date(Date.now() + b * 100 + i),
+        });
       }),
     );
     const ids = batches.flat().map((r) => r.id);
@@ -33,7 +40,12 @@ describe("a sync interrupted by the server stopping", () => {
         headers: { "content-type": "application/json" },
         body: JSON.stringify({ deviceId: "phone-c", records: batch }),
       });
-    const inFlight = batches.map((batch) => send(session, batch).then((r) => r.status, () => "lost" as const));
+    const inFlight = batches.map((batch) =>
+      send(session, batch).then(
+        (r) => r.status,
+        () => "lost" as const,
+      ),
+    );
     await Promise.race(inFlight);
     await doomed.stop("SIGKILL");
     const outcomes = await Promise.all(inFlight);

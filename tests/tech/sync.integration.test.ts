@@ -36,32 +36,88 @@ describe("POST /api/events/[eventId]/sync", () => {
   it("stores each record once when the same batch arrives three times", async () => {
     const entryId = await fx.entryByNumber(7);
     const batch = [0, 1, 2, 3, 4].map((i) =>
-      readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "wingSpanMm", valueMm: 1400 + i * 0.2, at: new Date(Date.now() + i) }),
+      readingRecord({
+        entryId,
+        officialId: scrutineerId,
+        deviceId: "phone-a",
+        dimension: "wingSpanMm",
+        valueMm: 1400 + i * 0.2,
+        at: new Date(Date.now() + i),
+      }),
     );
     const first = await sync(scrutineer, batch);
     expect(first.status).toBe(200);
-    expect(first.body.results.map((r) => r.status)).toEqual(["stored", "stored", "stored", "stored", "stored"]);
+    expect(first.body.results.map((r) => r.status)).toEqual([
+      "stored",
+      "stored",
+      "stored",
+      "stored",
+      "stored",
+    ]);
     for (let replay = 0; replay < 2; replay += 1) {
       const again = await sync(scrutineer, batch);
-      expect(again.body.results.map((r) => r.status)).toEqual(["duplicate", "duplicate", "duplicate", "duplicate", "duplicate"]);
+      expect(again.body.results.map((r) => r.status)).toEqual([
+        "duplicate",
+        "duplicate",
+        "duplicate",
+        "duplicate",
+        "duplicate",
+      ]);
     }
-    expect(await countRecords(databaseUrl, batch.map((r) => r.id))).toBe(5);
+    expect(
+      await countRecords(
+        databaseUrl,
+        batch.map((r) => r.id),
+      ),
+    ).toBe(5);
   });
 
   it("stores the good records of a batch and reports the bad one with a reason", async () => {
     const entryId = await fx.entryByNumber(7);
     const good = [
-      readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "bodyWidthMm", valueMm: 1720 }),
-      readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "bodyWidthMm", valueMm: 1720.4, at: new Date(Date.now() + 5) }),
+      readingRecord({
+        entryId,
+        officialId: scrutineerId,
+        deviceId: "phone-a",
+        dimension: "bodyWidthMm",
+        valueMm: 1720,
+      }),
+      readingRecord({
+        entryId,
+        officialId: scrutineerId,
+        deviceId: "phone-a",
+        dimension: "bodyWidthMm",
+        valueMm: 1720.4,
+        at: new Date(Date.now() + 5),
+      }),
     ];
-    const bad = { ...readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "bodyWidthMm", valueMm: -3 }) };
-    const notMine = readingRecord({ entryId, officialId: await fx.userId(demo.scrutineer2), deviceId: "phone-a", dimension: "bodyWidthMm", valueMm: 1721 });
+    const bad = {
+      ...readingRecord({
+        entryId,
+        officialId: scrutineerId,
+        deviceId: "phone-a",
+        dimension: "bodyWidthMm",
+        valueMm: -3,
+      }),
+    };
+    const notMine = readingRecord({
+      entryId,
+      officialId: await fx.userId(demo.scrutineer2),
+      deviceId: "phone-a",
+      dimension: "bodyWidthMm",
+      valueMm: 1721,
+    });
     const { status, body } = await sync(scrutineer, [good[0], bad, good[1], notMine]);
     expect(status).toBe(200);
     expect(body.results.map((r) => r.status)).toEqual(["stored", "refused", "stored", "refused"]);
     expect(body.results[1]?.reason).toMatch(/negative/);
     expect(body.results[3]?.reason).toMatch(/another official/);
-    expect(await countRecords(databaseUrl, good.map((r) => r.id))).toBe(2);
+    expect(
+      await countRecords(
+        databaseUrl,
+        good.map((r) => r.id),
+      ),
+    ).toBe(2);
     expect(await countRecords(databaseUrl, [bad.id, notMine.id])).toBe(0);
   });
 
@@ -89,7 +145,13 @@ describe("POST /api/events/[eventId]/sync", () => {
 
   it("answers 401 to a phone whose sign-in expired, and 403 to an entrant", async () => {
     const entryId = await fx.entryByNumber(7);
-    const record = readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "wingChordMm", valueMm: 250 });
+    const record = readingRecord({
+      entryId,
+      officialId: scrutineerId,
+      deviceId: "phone-a",
+      dimension: "wingChordMm",
+      valueMm: 250,
+    });
     const anonymous = new HttpSession(appUrl);
     expect((await sync(anonymous, [record])).status).toBe(401);
     const entrant = new HttpSession(appUrl);
@@ -101,17 +163,35 @@ describe("POST /api/events/[eventId]/sync", () => {
   it("flags for the chief scrutineer two devices' readings of one car that disagree", async () => {
     // Test values, not trade facts: 1400.0 mm and 1412.0 mm with u = 0.5 mm each differ by 12 mm,
     // far beyond their combined expanded uncertainty (k = 2: about 1.4 mm).
-    const entryId = await fx.entryByNumber((await fx.entryNumbers()).find((e) => e.carNumber !== 7)?.carNumber ?? 0);
+    const entryId = await fx.entryByNumber(
+      (await fx.entryNumbers()).find((e) => e.carNumber !== 7)?.carNumber ?? 0,
+    );
     const other = new HttpSession(appUrl);
     await other.signInWithPassword(demo.scrutineer2, demo.password);
-    const a = readingRecord({ entryId, officialId: scrutineerId, deviceId: "phone-a", dimension: "wingSpanMm", valueMm: 1400 });
-    const b = readingRecord({ entryId, officialId: await fx.userId(demo.scrutineer2), deviceId: "phone-b", dimension: "wingSpanMm", valueMm: 1412 });
+    const a = readingRecord({
+      entryId,
+      officialId: scrutineerId,
+      deviceId: "phone-a",
+      dimension: "wingSpanMm",
+      valueMm: 1400,
+    });
+    const b = readingRecord({
+      entryId,
+      officialId: await fx.userId(demo.scrutineer2),
+      deviceId: "phone-b",
+      dimension: "wingSpanMm",
+      valueMm: 1412,
+    });
     await sync(scrutineer, [a]);
     const { body } = await sync(other, [b]);
     const verdict = body.verdicts.find((v) => v.entryId === entryId);
     expect(verdict?.flags).toContain("disagreement");
     expect(verdict?.needsChief).toBe(true);
-    const [row] = await queryTestDb<{ needs_chief: number }>(databaseUrl, "select needs_chief from verdicts where entry_id = ?", [entryId]);
+    const [row] = await queryTestDb<{ needs_chief: number }>(
+      databaseUrl,
+      "select needs_chief from verdicts where entry_id = ?",
+      [entryId],
+    );
     expect(row?.needs_chief).toBe(1);
   });
 });

@@ -23,7 +23,10 @@ export default async function BoardPage({ params }: { params: Promise<{ eventId:
       <div>
         <p className="text-base font-semibold uppercase tracking-wider text-accent">Tech board</p>
         <h1 className="text-3xl font-bold">{board.eventName}</h1>
-        <p className="text-base">Only cleared and moved-up cars may go into run groups. The chief scrutineer has the final say.</p>
+        <p className="text-base">
+          Only cleared and moved-up cars may go into run groups. The chief scrutineer has the final
+          say.
+        </p>
       </div>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <TechBoard eventId={eventId} />

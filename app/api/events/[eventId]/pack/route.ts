@@ -15,8 +15,13 @@ export const GET = handleRoute(async (request: Request, { params }: Context) => 
   const eventId = idSchema.parse((await params).eventId);
   await requirePermission({ eventId, permission: "tech.read" });
   const since = sinceSchema.parse(new URL(request.url).searchParams.get("since"));
-  const pack = await buildEventPack({ eventId, since: since ? new Date(since) : null, now: new Date() });
+  const pack = await buildEventPack({
+    eventId,
+    since: since ? new Date(since) : null,
+    now: new Date(),
+  });
   const headers = { etag: pack.etag, "cache-control": "private, no-cache" };
-  if (request.headers.get("if-none-match") === pack.etag) return new NextResponse(null, { status: 304, headers });
+  if (request.headers.get("if-none-match") === pack.etag)
+    return new NextResponse(null, { status: 304, headers });
   return NextResponse.json(pack, { headers });
 });

@@ -13,6 +13,12 @@ export const POST = handleRoute(async (request: Request, { params }: Context) =>
   const eventId = idSchema.parse((await params).eventId);
   const { user, roles } = await requirePermission({ eventId, permission: "readings.write" });
   const body = await parseJsonBody(request, syncRequestSchema);
-  const response = await syncRecords({ eventId, user, roles, rawRecords: body.records, now: new Date() });
+  const response = await syncRecords({
+    eventId,
+    user,
+    roles,
+    rawRecords: body.records,
+    now: new Date(),
+  });
   return NextResponse.json(response, { headers: { "cache-control": "no-store" } });
 });

@@ -14,11 +14,16 @@ export const POST = handleRoute(async (request: Request, { params }: Context) =>
   const eventId = idSchema.parse((await params).eventId);
   const { user } = await requirePermission({ eventId, permission: "readings.write" });
   const form = await request.formData().catch(() => {
-    throw new AppError("invalid_input", "Send the photo as multipart form data.", { file: ["Missing"] });
+    throw new AppError("invalid_input", "Send the photo as multipart form data.", {
+      file: ["Missing"],
+    });
   });
-  const fields = uploadFieldsSchema.parse(Object.fromEntries(["recordId", "entryId", "storageKey"].map((k) => [k, form.get(k)])));
+  const fields = uploadFieldsSchema.parse(
+    Object.fromEntries(["recordId", "entryId", "storageKey"].map((k) => [k, form.get(k)])),
+  );
   const file = form.get("file");
-  if (!(file instanceof File)) throw new AppError("invalid_input", "No photo in the form.", { file: ["Attach the photo"] });
+  if (!(file instanceof File))
+    throw new AppError("invalid_input", "No photo in the form.", { file: ["Attach the photo"] });
   const stored = await storePhoto({ eventId, ...fields, file, uploadedBy: user.id });
   return NextResponse.json({ stored }, { status: 201 });
 });
