@@ -69,11 +69,18 @@ export function EntryList({
               data-car-number={row.carNumber}
             >
               {onSelect ? (
-                <button type="button" className="block min-h-touch w-full text-left" onClick={() => onSelect(row.entryId)}>
+                <button
+                  type="button"
+                  className="block min-h-touch w-full text-left"
+                  onClick={() => onSelect(row.entryId)}
+                >
                   {body}
                 </button>
               ) : hrefTemplate ? (
-                <Link href={hrefTemplate.replace(":entryId", row.entryId)} className="block min-h-touch">
+                <Link
+                  href={hrefTemplate.replace(":entryId", row.entryId)}
+                  className="block min-h-touch"
+                >
                   {body}
                 </Link>
               ) : (

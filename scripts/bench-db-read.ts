@@ -103,7 +103,7 @@ export async function measureDbRead(
         updatedAt: now,
       };
     });
-    const carRows = entryRows.map((e) => ({
+    const carRows = entryRows.map(() => ({
       id: uuidv7(),
       ownerId: ids.user,
       make: "Bench",

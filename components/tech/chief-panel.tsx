@@ -34,7 +34,7 @@ export function ChiefPanel({
   const [reason, setReason] = useState("");
   const [message, setMessage] = useState<string | null>(null);
 
-  const describe = (r: TechRecord) =>
+  const describeRecord = (r: TechRecord) =>
     r.kind === "reading"
       ? `${dimensionLabel(r.payload.dimension, "corner" in r.payload ? r.payload.corner : null)} ${formatReadingValue(r.payload.dimension, r.payload.value, pack.event.unitSystem)}`
       : r.kind === "checklist"
@@ -102,7 +102,7 @@ export function ChiefPanel({
             <option value="">Pick a reading or checklist answer</option>
             {voidable.map((r) => (
               <option key={r.id} value={r.id}>
-                {describe(r)} —{" "}
+                {describeRecord(r)} —{" "}
                 {pack.officials.find((o) => o.userId === r.officialId)?.name ?? "official"}
               </option>
             ))}

@@ -145,6 +145,7 @@ function PhotoThumb({ photo }: { photo: Photo }) {
   return (
     <li className="overflow-hidden rounded-lg border border-asphalt-300 bg-asphalt-100">
       {src ? (
+        // biome-ignore lint/performance/noImgElement: a blob: URL of a photo still on this phone; next/image cannot load it
         <img
           src={src}
           alt={photo.payload.caption ?? "Tech-line photo"}
