@@ -4,6 +4,7 @@
 #   scripts/mariadb.sh stop            shut our server down cleanly
 #   scripts/mariadb.sh status          exit 0 when our server answers
 #   scripts/mariadb.sh sql "<SQL>"     run SQL as root over the private socket
+#   scripts/mariadb.sh reset           drop and re-create the app database (empty; demo only)
 # Settings: PLUMBLINE_DB_PORT (3307), PLUMBLINE_DB_NAME (plumbline),
 #           PLUMBLINE_DB_USER (plumbline), PLUMBLINE_DB_PASSWORD (plumbline-demo).
 set -euo pipefail
@@ -91,5 +92,6 @@ case "${1:-}" in
   stop) stop ;;
   status) running ;;
   sql) running && root_sql "$2" ;;
-  *) echo "usage: $0 start|stop|status|sql <SQL>" >&2; exit 2 ;;
+  reset) start && root_sql "DROP DATABASE IF EXISTS \`$NAME\`;" && start ;;
+  *) echo "usage: $0 start|stop|status|reset|sql <SQL>" >&2; exit 2 ;;
 esac

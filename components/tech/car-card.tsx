@@ -6,6 +6,7 @@ import { mergeEntryRecords } from "@/lib/offline/merge-entry-records";
 import { previewVerdict } from "@/lib/offline/preview-verdict";
 import { ChecklistPanel } from "./checklist-panel";
 import { ChiefPanel } from "./chief-panel";
+import { EnvelopePanel } from "./envelope-panel";
 import { PhotosNotesPanel } from "./photos-notes-panel";
 import { ReadingsPanel } from "./readings-panel";
 import { useTech } from "./tech-context";
@@ -98,6 +99,7 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
           />
         ) : null}
       </section>
+      {preview ? <EnvelopePanel verdict={preview} /> : null}
       <ReadingsPanel entryId={entryId} records={records} verdict={preview} />
       <ChecklistPanel entryId={entryId} verdict={preview} />
       <PhotosNotesPanel entryId={entryId} records={records} />

@@ -7,6 +7,8 @@ import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
 import { parseLength } from "@/lib/scrutineer/parse-length";
 import { type Corner, type Dimension, SIGNED_DIMENSIONS } from "@/lib/scrutineer/record-schema";
 import { defaultInstruments } from "@/lib/tech/default-instruments";
+import { formatReadingValue } from "./format-reading-value";
+import { sentenceCase } from "./sentence-case";
 import { useTech } from "./tech-context";
 
 const unitOf = (d: Dimension) =>
@@ -85,7 +87,7 @@ export function ReadingEntry({
       }),
     );
     setText("");
-    setSaved(`Saved on this phone: ${label} ${text}`);
+    setSaved(`Saved on this phone: ${label} ${formatReadingValue(dimension, value, unitSystem)}`);
   };
 
   const placeholder =
@@ -113,7 +115,7 @@ export function ReadingEntry({
         }}
       >
         <label className="block">
-          <span className="field-label capitalize">{label}</span>
+          <span className="field-label">{sentenceCase(label)}</span>
           <input
             className="field-input tabular text-2xl"
             inputMode={kind === "mm" && unitSystem === "in" ? "text" : "decimal"}

@@ -6,6 +6,7 @@ import type { Verdict } from "@/lib/scrutineer/verdict-schema";
 import { formatReadingValue } from "./format-reading-value";
 import { ReadingEntry } from "./reading-entry";
 import { readingTargets } from "./reading-targets";
+import { sentenceCase } from "./sentence-case";
 import { useTech } from "./tech-context";
 
 type Reading = Extract<TechRecord, { kind: "reading" }>;
@@ -64,8 +65,8 @@ export function ReadingsPanel({
                       aria-expanded={isOpen}
                       data-testid={`reading-target-${target.key}`}
                     >
-                      <span className="font-semibold capitalize">
-                        {dimensionLabel(target.dimension, target.corner)}
+                      <span className="font-semibold">
+                        {sentenceCase(dimensionLabel(target.dimension, target.corner))}
                       </span>
                       <span className="tabular text-base">
                         {summary

@@ -73,7 +73,7 @@ export function TechLineApp(props: {
     const packNow = result.pack.pack;
     setPrepareMessage(
       result.pack.message === null && packNow
-        ? `Ready for offline: ${packNow.entries.length} cars in the event pack, ${result.pagesSaved} pages saved on this phone.`
+        ? `Ready for offline: ${packNow.entries.length} cars in the event pack, ${result.pagesSaved} ${result.pagesSaved === 1 ? "page" : "pages"} saved on this phone.`
         : result.pack.message,
     );
   };
@@ -119,12 +119,15 @@ export function TechLineApp(props: {
   const fetchNote = data.lastFetch?.message ?? null;
   const header = (
     <div className="space-y-3">
-      <PackStatus
-        pack={pack}
-        preparing={preparing}
-        message={prepareMessage ?? fetchNote}
-        onPrepare={() => void prepare()}
-      />
+      {/* On a car card the screen is for that car: the pack's state waits on the list. */}
+      {entryId && pack ? null : (
+        <PackStatus
+          pack={pack}
+          preparing={preparing}
+          message={prepareMessage ?? fetchNote}
+          onPrepare={() => void prepare()}
+        />
+      )}
       <OutboxPanel
         local={data.local}
         online={outbox.online}

@@ -1,7 +1,11 @@
 // The demo event day (invented): a club, its venue, a rule set, one event with about 40 entries in
 // four classes, an official for every role, and entrants — one car shared by two drivers.
 import { v7 as uuidv7 } from "uuid";
+import { displayUnits } from "../../lib/scrutineer/display-units";
 import type { EntryDeclarationsInput } from "../../lib/scrutineer/entry-declarations-schema";
+import { entryDeclarationsSchema } from "../../lib/scrutineer/entry-declarations-schema";
+import { evaluateEntry } from "../../lib/scrutineer/evaluate-entry";
+import { needsChiefScrutineer } from "../../lib/tech/needs-chief-scrutineer";
 import type { Db } from "../client";
 import {
   cars,
@@ -10,10 +14,12 @@ import {
   eventOfficials,
   events,
   payments,
+  records,
   ruleSets,
   ruleSetVersions,
   users,
   venues,
+  verdicts,
   waivers,
 } from "../schema";
 import { DEMO_PASSWORD_HASH } from "./demo-password";
@@ -27,6 +33,7 @@ import {
   demoOfficials,
 } from "./demo-people";
 import { demoRuleSet } from "./demo-rule-set";
+import { type DemoTwist, demoTechRecords } from "./demo-tech-records";
 import { createPrng } from "./prng";
 
 /** Classes of the demo ladder and how many entries each gets (40 in all). */
@@ -127,6 +134,15 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     }
   }
 
+  const { recordRows, verdictRows } = demoTechLine({
+    entryRows,
+    eventId,
+    eventDate,
+    ruleSetVersionId,
+    userIds,
+    now,
+  });
+
   await db.transaction(async (tx) => {
     await tx.insert(users).values(userRows);
     await tx.insert(clubs).values({
@@ -186,6 +202,8 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     await tx.insert(entries).values(entryRows);
     await tx.insert(waivers).values(demoWaivers(entryRows, eventId, now));
     await tx.insert(payments).values(demoPayments(entryRows, eventId, now));
+    if (recordRows.length > 0) await tx.insert(records).values(recordRows);
+    if (verdictRows.length > 0) await tx.insert(verdicts).values(verdictRows);
   });
 
   return { eventId, entryIds: entryRows.map((e) => e.id as string), userIds };
@@ -269,4 +287,87 @@ function demoPayments(
     createdAt: now,
     updatedAt: now,
   }));
+}
+
+/** Which demo cars have been through the tech line already, and what went wrong for a few. */
+function demoTwistFor(index: number): DemoTwist | null {
+  // Car 7 (index 0, the demo entrant's) and the last thirteen entries are still to come.
+  if (index === 0 || index > 26) return null;
+  const twists: Record<number, DemoTwist> = {
+    3: "over-height",
+    14: "over-height",
+    16: "over-height",
+    9: "expired-harness",
+    20: "too-close",
+    24: "disagree",
+  };
+  return twists[index] ?? "none";
+}
+
+/** The demo's tech-line records and the verdicts the engine derives from them. */
+function demoTechLine(opts: {
+  entryRows: (typeof entries.$inferInsert)[];
+  eventId: string;
+  eventDate: string;
+  ruleSetVersionId: string;
+  userIds: Record<string, string>;
+  now: Date;
+}) {
+  const officials: [string, string] = [
+    opts.userIds.scrutineer ?? "",
+    opts.userIds.scrutineer2 ?? "",
+  ];
+  const recordRows: (typeof records.$inferInsert)[] = [];
+  const verdictRows: (typeof verdicts.$inferInsert)[] = [];
+  opts.entryRows.forEach((entry, index) => {
+    const twist = demoTwistFor(index);
+    const cls = demoRuleSet.classes.find((c) => c.id === entry.declaredClass);
+    if (twist === null || !cls) return;
+    const declarations = entry.declarations as EntryDeclarationsInput;
+    const entryId = entry.id as string;
+    const made = demoTechRecords(
+      {
+        entryId,
+        cls,
+        declarations,
+        officials,
+        eventDate: opts.eventDate,
+        twist,
+        seed: 1000 + index,
+      },
+      demoRuleSet,
+    );
+    const verdict = evaluateEntry({
+      ruleSet: demoRuleSet,
+      entry: {
+        entryId,
+        declaredClassId: cls.id,
+        declarations: entryDeclarationsSchema.parse(declarations),
+      },
+      records: made,
+      eventDate: opts.eventDate,
+      display: displayUnits({ length: "mm" }),
+    });
+    for (const r of made) {
+      recordRows.push({
+        ...r,
+        eventId: opts.eventId,
+        deviceTime: new Date(r.deviceTime),
+        receivedAt: opts.now,
+      });
+    }
+    verdictRows.push({
+      eventId: opts.eventId,
+      entryId,
+      status: verdict.status,
+      finalClass: verdict.classId,
+      needsChief: needsChiefScrutineer(verdict),
+      reason: verdict.reason.slice(0, 500),
+      ruleSetVersionId: opts.ruleSetVersionId,
+      result: verdict,
+      recordCount: verdict.records.total,
+      computedAt: opts.now,
+    });
+  });
+  return { recordRows, verdictRows };
 }
