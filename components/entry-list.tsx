@@ -47,16 +47,20 @@ export function EntryList({
                 <div className="flex flex-wrap items-center gap-2">
                   <span className="text-lg font-semibold">{row.car}</span>
                   <span className="rounded border border-asphalt-400 px-2 text-base">
-                    {row.finalClass ?? row.declaredClass}
+                    {row.declaredClass}
                   </span>
                 </div>
                 <p className="text-base text-asphalt-800">{row.drivers}</p>
-                {row.reason ? <p className="text-base text-asphalt-800">{row.reason}</p> : null}
-              </div>
-              <div className="flex flex-col items-end gap-1">
-                <VerdictBadge status={row.status} toClass={row.finalClass} />
-                {row.needsChief ? (
-                  <span className="text-base font-semibold text-attention">Chief scrutineer</span>
+                <div className="mt-1 flex flex-wrap items-center gap-2">
+                  <VerdictBadge status={row.status} toClass={row.finalClass} />
+                  {row.needsChief ? (
+                    <span className="text-base font-semibold text-attention">
+                      For the chief scrutineer
+                    </span>
+                  ) : null}
+                </div>
+                {row.reason ? (
+                  <p className="mt-1 text-base text-asphalt-800">{row.reason}</p>
                 ) : null}
               </div>
             </div>
