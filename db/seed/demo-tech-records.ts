@@ -27,8 +27,10 @@ export function demoTechRecords(ctx: Ctx, ruleSet: RuleSet): TechRecord[] {
   const rnd = createPrng(ctx.seed);
   const year = Number(ctx.eventDate.slice(0, 4));
   let minute = 0;
-  const at = () =>
-    new Date(`${ctx.eventDate}T08:30:00Z`).getTime() + (minute += 1) * 60_000 + rnd.int(0, 50_000);
+  const at = () => {
+    minute += 1;
+    return new Date(`${ctx.eventDate}T08:30:00Z`).getTime() + minute * 60_000 + rnd.int(0, 50_000);
+  };
   const [first, second] = ctx.officials;
   const base = (officialId: string) => {
     const t = at();
