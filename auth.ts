@@ -16,6 +16,13 @@ const LINK_VALID_MINUTES = 30;
 
 export const { handlers, auth, signIn, signOut } = NextAuth({
   ...authConfig,
+  logger: {
+    // A wrong password is an everyday event, answered on the form; keep it out of the error log.
+    error(error) {
+      if (error.name === "CredentialsSignin") return;
+      console.error("[auth]", error);
+    },
+  },
   adapter: DrizzleAdapter(getDb(), {
     usersTable: users,
     accountsTable: accounts,

@@ -12,7 +12,7 @@ require_node
 ensure_node_modules
 bash scripts/mariadb.sh start
 
-export PORT="${PORT:-3000}"
+export PORT="${PORT:-3000}" NEXT_TELEMETRY_DISABLED=1
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
 
 node_modules/.bin/tsx scripts/migrate.ts
@@ -28,7 +28,9 @@ fi
 node_modules/.bin/tsx scripts/services.ts &
 SERVICES_PID=$!
 trap 'kill "$SERVICES_PID" 2>/dev/null || true' EXIT INT TERM
-wait_port 2525 && wait_port 2580 && wait_port 4568 || { say "local service fakes did not start"; exit 1; }
+mailbox_port="${MAILBOX_URL:-http://127.0.0.1:2580}"; mailbox_port="${mailbox_port##*:}"; mailbox_port="${mailbox_port%%/*}"
+s3_port="${S3_ENDPOINT:-http://127.0.0.1:4568}"; s3_port="${s3_port##*:}"; s3_port="${s3_port%%/*}"
+wait_port "${SMTP_PORT:-2525}" && wait_port "$mailbox_port" && wait_port "$s3_port" || { say "local service fakes did not start"; exit 1; }
 
 say "Plumbline on $APP_URL — demo accounts are in README.md (Ctrl-C to stop)"
 node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"

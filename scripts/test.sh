@@ -12,7 +12,7 @@ ensure_node_modules
 ensure_debian chromium chromium
 ensure_debian ffmpeg ffmpeg
 bash scripts/mariadb.sh start
-export TZ=UTC
+export TZ=UTC NEXT_TELEMETRY_DISABLED=1
 export NEXT_DIST_DIR=.next-test
 mkdir -p .data
 
