@@ -353,7 +353,8 @@ function demoTechLine(opts: {
         ...r,
         eventId: opts.eventId,
         deviceTime: new Date(r.deviceTime),
-        receivedAt: opts.now,
+        // Synced an hour before the demo starts (never in the future, whatever the event date).
+        receivedAt: new Date(opts.now.getTime() - 3_600_000),
       });
     }
     verdictRows.push({

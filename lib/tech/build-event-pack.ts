@@ -45,7 +45,8 @@ export async function buildEventPack({
     listEventRecordsSince({ eventId, since: null }),
   ]);
   const last = allRecords.at(-1)?.receivedAt ?? null;
-  const recordsCursor = last ? new Date(Date.parse(last) - CURSOR_SAFETY_MS).toISOString() : null;
+  // The cursor is this pack's own time, stepped back: everything received before then is in it.
+  const recordsCursor = new Date(now.getTime() - CURSOR_SAFETY_MS).toISOString();
   const records = since
     ? allRecords.filter((r) => Date.parse(r.receivedAt) > since.getTime())
     : allRecords;
