@@ -1,20 +1,10 @@
 import { defineConfig, devices } from "@playwright/test";
+import { chromiumArgs } from "./e2e/support/chromium-args";
 
 // Playwright in Debian's Chromium (never a downloaded browser) against `next start` of the test
 // build. scripts/test.sh prepares the database and passes its URL in the environment.
 const port = Number(process.env.PLUMBLINE_E2E_APP_PORT ?? 3300);
 const baseURL = `http://127.0.0.1:${port}`;
-
-const chromiumArgs = [
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-quic",
-  "--no-first-run",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  "--disable-dev-shm-usage",
-];
 
 export default defineConfig({
   testDir: "e2e",

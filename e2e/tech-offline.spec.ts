@@ -3,19 +3,9 @@ import { PNG } from "pngjs";
 import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
 import { TechLinePage } from "./pages/tech-line-page";
+import { chromiumArgs } from "./support/chromium-args";
 import { forgePass } from "./support/forge-pass";
 import { makePassVideo } from "./support/pass-video";
-
-const chromiumArgs = [
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-quic",
-  "--no-first-run",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  "--disable-dev-shm-usage",
-];
 
 /** A small grey PNG standing in for a phone photo of the car. */
 function photoPng(): Buffer {

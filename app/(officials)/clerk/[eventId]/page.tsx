@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { ClassTally } from "@/components/class-tally";
 import { EntryList } from "@/components/entry-list";
 import { EventHeading } from "@/components/event-heading";
 import { listEventEntries } from "@/db/queries/list-event-entries";
@@ -18,11 +19,6 @@ export default async function ClerkPage({ params }: { params: Promise<{ eventId:
   const cleared = all
     .filter((row) => row.status === "cleared" || row.status === "moved-up")
     .map(toEntryListRow);
-  const byClass = new Map<string, number>();
-  for (const row of cleared) {
-    const cls = row.finalClass ?? row.declaredClass; // display names (toEntryListRow)
-    byClass.set(cls, (byClass.get(cls) ?? 0) + 1);
-  }
   return (
     <div>
       <EventHeading roleLabel="Clerk of course" title="Cleared cars" event={event}>
@@ -32,16 +28,12 @@ export default async function ClerkPage({ params }: { params: Promise<{ eventId:
           go into run groups.
         </p>
       </EventHeading>
-      <ul className="mb-4 flex flex-wrap gap-2" data-testid="cleared-by-class">
-        {[...byClass.entries()].map(([cls, count]) => (
-          <li
-            key={cls}
-            className="rounded-full border-2 border-asphalt-700 px-3 py-1 font-semibold"
-          >
-            {cls}: <span className="tabular">{count}</span>
-          </li>
-        ))}
-      </ul>
+      <div className="mb-4">
+        <ClassTally
+          classNames={cleared.map((row) => row.finalClass ?? row.declaredClass)}
+          testId="cleared-by-class"
+        />
+      </div>
       <EntryList rows={cleared} emptyText="No car is cleared yet." />
     </div>
   );

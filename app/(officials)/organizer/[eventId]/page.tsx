@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { ClassTally } from "@/components/class-tally";
 import { EventHeading } from "@/components/event-heading";
 import { StatusCounts } from "@/components/status-counts";
 import { listEventEntries } from "@/db/queries/list-event-entries";
@@ -21,9 +22,6 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
     listEventEntries({ eventId }),
     listEventOfficials({ eventId }),
   ]);
-  const byClass = new Map<string, number>();
-  for (const row of entries)
-    byClass.set(row.declaredClassName, (byClass.get(row.declaredClassName) ?? 0) + 1);
   const facts: [string, string][] = [
     ["Club", event.clubName],
     ["Venue", `${event.venueName} (${(event.trackLengthM / 1000).toFixed(2)} km)`],
@@ -57,16 +55,7 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
       </section>
       <section className="space-y-2">
         <h2 className="text-2xl font-bold">Entries by declared class</h2>
-        <ul className="flex flex-wrap gap-2">
-          {[...byClass.entries()].map(([cls, count]) => (
-            <li
-              key={cls}
-              className="rounded-full border-2 border-asphalt-700 px-3 py-1 font-semibold"
-            >
-              {cls}: <span className="tabular">{count}</span>
-            </li>
-          ))}
-        </ul>
+        <ClassTally classNames={entries.map((row) => row.declaredClassName)} />
       </section>
       <section className="space-y-2">
         <h2 className="text-2xl font-bold">Officials</h2>
