@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { queryTestDb } from "../support/query-test-db";
 import { readingRecord, techFixtures } from "../support/tech-fixtures";
 
 const appUrl = inject("appUrl");
@@ -94,6 +95,12 @@ describe("results posted by e-mail", () => {
       kind: "checklist",
       payload: { itemId: "battery", result: "fail", comment: "Battery loose in its tray." },
     };
+    const [before] = await queryTestDb<{ status: string }>(
+      databaseUrl,
+      "select status from verdicts where entry_id = ?",
+      [entryId],
+    );
+    expect(before?.status ?? "waiting", "car 7 must not be held before this test").not.toBe("held");
     const since = Date.now() - 1000;
     const response = await scrutineer.fetch(`/api/events/${fx.eventId}/sync`, {
       method: "POST",
