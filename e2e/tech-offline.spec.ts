@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import { devices, expect, test } from "@playwright/test";
 import { PNG } from "pngjs";
 import { demo } from "../tests/support/demo-accounts";
@@ -155,4 +158,42 @@ test("control: with service workers blocked, the tech line does not open offline
   const reloaded = await page.reload().catch((error: Error) => error);
   expect(reloaded).toBeInstanceOf(Error);
   await context.close();
+});
+
+test("the prepared tech line opens with no signal after the browser is closed and opened again", async ({
+  playwright,
+  baseURL,
+}, testInfo) => {
+  testInfo.setTimeout(120_000);
+  const profile = mkdtempSync(path.join(tmpdir(), "plumbline-phone-"));
+  const open = () =>
+    playwright.chromium.launchPersistentContext(profile, {
+      ...devices["Pixel 7"],
+      baseURL: baseURL ?? "",
+      executablePath: "/usr/bin/chromium",
+      args: chromiumArgs,
+    });
+  let context = await open();
+  let page = context.pages()[0] ?? (await context.newPage());
+  await new SignInPage(page).open();
+  await new SignInPage(page).withPassword(demo.scrutineer2, demo.password);
+  await expect(page).toHaveURL(/\/tech\/[0-9a-f-]{36}$/);
+  const techUrl = page.url();
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+  });
+  await page.reload();
+  await new TechLinePage(page).prepareForOffline();
+  await context.close();
+
+  // Reopened in the pit: no signal from the first request.
+  context = await open();
+  await context.setOffline(true);
+  page = context.pages()[0] ?? (await context.newPage());
+  await page.goto(techUrl);
+  await expect(page.getByRole("heading", { name: "Scrutineering" })).toBeVisible();
+  await expect(page.getByTestId("pack-fetched-at")).toBeVisible();
+  await new TechLinePage(page).openByNumber(7);
+  await context.close();
+  rmSync(profile, { recursive: true, force: true });
 });

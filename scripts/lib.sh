@@ -45,10 +45,16 @@ wait_port() {
   return 1
 }
 
-# The newest source change is newer than the last build?
+# Both builds (the demo's .next, the tests' .next-test) write the one public/sw.js, whose
+# precache list names that build's files: a build is only current if the service worker is its own.
+sw_hash() { sha256sum "$ROOT/public/sw.js" 2>/dev/null | cut -c1-64; }
+record_build() { sw_hash >"$ROOT/$1/.plumbline-sw-sha"; }
+
+# The newest source change is newer than the last build, or the service worker is another build's?
 build_is_stale() {
   local dist="$1"
   [ -f "$ROOT/$dist/BUILD_ID" ] || return 0
+  [ "$(cat "$ROOT/$dist/.plumbline-sw-sha" 2>/dev/null)" = "$(sw_hash)" ] || return 0
   [ -n "$(cd "$ROOT" && find app components lib db public auth.ts auth.config.ts proxy.ts next.config.ts \
     tailwind.config.ts postcss.config.mjs package-lock.json -newer "$dist/BUILD_ID" -type f \
     -not -name 'sw.js' -not -name 'swe-worker-*' -print -quit 2>/dev/null)" ]

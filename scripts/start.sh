@@ -11,6 +11,7 @@ cd "$ROOT"
 require_node
 ensure_node_modules
 bash scripts/mariadb.sh start
+mkdir -p .data
 
 export PORT="${PORT:-3000}" NEXT_TELEMETRY_DISABLED=1
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
@@ -21,6 +22,7 @@ node_modules/.bin/tsx scripts/seed.ts
 if build_is_stale .next; then
   say "building the app (next build --webpack, about a minute)"
   node_modules/.bin/next build --webpack >.data/build.log 2>&1 || { tail -40 .data/build.log; exit 1; }
+  record_build .next
 else
   say "build is up to date"
 fi

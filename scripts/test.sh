@@ -26,6 +26,7 @@ node_modules/.bin/vitest run --project unit
 if build_is_stale "$NEXT_DIST_DIR"; then
   say "building the app for the tests (next build --webpack)"
   node_modules/.bin/next build --webpack >.data/test-build.log 2>&1 || { tail -60 .data/test-build.log; exit 1; }
+  record_build "$NEXT_DIST_DIR"
 else
   say "test build is up to date"
 fi
