@@ -4,6 +4,7 @@ import type { Role } from "./roles";
 export type Permission =
   | "event.read"
   | "event.manage"
+  | "rule-sets.manage"
   | "officials.manage"
   | "entries.read"
   | "entries.manage"
@@ -21,7 +22,14 @@ export type Permission =
 const official: Permission[] = ["event.read", "entries.read"];
 
 export const rolePermissions: Record<Role, readonly Permission[]> = {
-  organizer: [...official, "event.manage", "officials.manage", "entries.manage", "tech.read"],
+  organizer: [
+    ...official,
+    "event.manage",
+    "rule-sets.manage",
+    "officials.manage",
+    "entries.manage",
+    "tech.read",
+  ],
   registrar: [...official, "entries.manage", "registration.check"],
   "chief-scrutineer": [
     ...official,

@@ -1,14 +1,10 @@
 import "server-only";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
-import { listEntriesForEvaluation } from "../../db/queries/list-entries-for-evaluation";
-import { listEntryRecords } from "../../db/queries/list-entry-records";
 import { saveVerdicts } from "../../db/queries/save-verdicts";
 import { AppError } from "../errors";
-import { displayUnits } from "../scrutineer/display-units";
-import { entryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
 import { evaluateEntry } from "../scrutineer/evaluate-entry";
-import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 import type { Verdict, VerdictStatus } from "../scrutineer/verdict-schema";
+import { loadEvaluationEntries } from "./load-evaluation-entries";
 import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 
 export type VerdictChange = {
@@ -32,28 +28,10 @@ export async function recomputeVerdicts({
 }): Promise<VerdictChange[]> {
   const context = await getEventRuleSet({ eventId });
   if (!context) throw new AppError("not_found", "No such event.");
-  const entries = await listEntriesForEvaluation({ eventId, entryIds });
-  const stored = await listEntryRecords({ eventId, entryIds: entries.map((e) => e.entryId) });
-  const byEntry = new Map<string, TechRecord[]>();
-  for (const row of stored) {
-    const parsed = recordSchema.safeParse(row);
-    if (!parsed.success) continue; // stored records were validated on the way in
-    byEntry.set(row.entryId, [...(byEntry.get(row.entryId) ?? []), parsed.data]);
-  }
-  const display = displayUnits({ length: context.unitSystem });
-  const results = entries.map((entry) => ({
-    entryId: entry.entryId,
-    verdict: evaluateEntry({
-      ruleSet: context.ruleSet,
-      entry: {
-        entryId: entry.entryId,
-        declaredClassId: entry.declaredClassId,
-        declarations: entryDeclarationsSchema.parse(entry.declarations),
-      },
-      records: byEntry.get(entry.entryId) ?? [],
-      eventDate: context.eventDate,
-      display,
-    }),
+  const inputs = await loadEvaluationEntries({ context, entryIds });
+  const results = inputs.map((input) => ({
+    entryId: input.entry.entryId,
+    verdict: evaluateEntry({ ...input, ruleSet: context.ruleSet }),
   }));
   const before = await saveVerdicts({
     eventId,

@@ -39,6 +39,9 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
           <Link href={`/tech/${eventId}`} className="btn-secondary">
             Tech line
           </Link>
+          <Link href={`/organizer/${eventId}/rules`} className="btn-secondary">
+            Class rules
+          </Link>
         </div>
       </EventHeading>
       <dl className="card grid gap-x-6 gap-y-2 sm:grid-cols-2" data-testid="event-facts">

@@ -1,0 +1,123 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import type { PinRuleSetState } from "@/components/rules/pin-rule-set-form";
+import type { RuleSetDraftState } from "@/components/rules/rule-set-editor";
+import { insertRuleSetVersion } from "@/db/queries/insert-rule-set-version";
+import { requirePermission } from "@/lib/auth/require-permission";
+import { AppError } from "@/lib/errors";
+import { idSchema } from "@/lib/http/id-schema";
+import { zodFieldErrors } from "@/lib/http/zod-field-errors";
+import { checkRuleSetDraft } from "@/lib/rule-sets/check-rule-set-draft";
+import { pinRuleSet } from "@/lib/rule-sets/pin-rule-set";
+import { previewRuleSetChange } from "@/lib/rule-sets/preview-rule-set-change";
+import { MAX_RULE_SET_CHARS } from "@/lib/scrutineer/parse-rule-set-json";
+
+const draftFormSchema = z.object({
+  eventId: idSchema,
+  intent: z.enum(["check", "save"]),
+  text: z.string().max(MAX_RULE_SET_CHARS, "That is too long for a rule set."),
+  notes: z.string().trim().max(500, "Keep the note under 500 characters."),
+});
+
+// Server action — the organizer checks a draft rule-set version (schema, successor rules and the
+// verdicts it would change) and, with intent "save", stores it as the next version.
+export async function draftRuleSetAction(
+  _state: RuleSetDraftState,
+  formData: FormData,
+): Promise<RuleSetDraftState> {
+  const form = draftFormSchema.safeParse({
+    eventId: formData.get("eventId"),
+    intent: formData.get("intent"),
+    text: formData.get("text") ?? "",
+    notes: formData.get("notes") ?? "",
+  });
+  if (!form.success) {
+    return {
+      status: "error",
+      message: "Some fields need attention.",
+      fields: zodFieldErrors(form.error),
+      issues: [],
+    };
+  }
+  const { eventId, intent, text, notes } = form.data;
+  try {
+    const { user } = await requirePermission({ eventId, permission: "rule-sets.manage" });
+    const checked = await checkRuleSetDraft({ eventId, text });
+    if (!checked.ok) {
+      return {
+        status: "error",
+        message: `${checked.issues.length} ${checked.issues.length === 1 ? "problem" : "problems"} to fix before this can be saved.`,
+        issues: checked.issues,
+      };
+    }
+    if (intent === "check") {
+      const preview = await previewRuleSetChange({ eventId, candidate: checked.ruleSet });
+      return { status: "checked", preview, issues: [] };
+    }
+    if (notes.length < 3) {
+      return {
+        status: "error",
+        message: "Say what changed and why before saving.",
+        fields: { notes: ["Say what changed and why (at least 3 characters)."] },
+        issues: [],
+      };
+    }
+    const saved = await insertRuleSetVersion({
+      eventId,
+      ruleSet: checked.ruleSet,
+      notes,
+      createdBy: user.id,
+    });
+    revalidatePath(`/organizer/${eventId}/rules`);
+    redirect(`/organizer/${eventId}/rules?version=${saved.id}`);
+  } catch (error) {
+    if (error instanceof AppError) {
+      return { status: "error", message: error.message, fields: error.fields, issues: [] };
+    }
+    throw error;
+  }
+}
+
+const pinFormSchema = z.object({
+  eventId: idSchema,
+  versionId: idSchema,
+  confirm: z.literal("yes", { message: "Tick the box to confirm." }),
+});
+
+// Server action — the organizer makes a saved version the one the event judges cars by; every
+// verdict is recomputed and drivers whose verdict changed are e-mailed.
+export async function pinRuleSetAction(
+  _state: PinRuleSetState,
+  formData: FormData,
+): Promise<PinRuleSetState> {
+  const form = pinFormSchema.safeParse({
+    eventId: formData.get("eventId"),
+    versionId: formData.get("versionId"),
+    confirm: formData.get("confirm"),
+  });
+  if (!form.success) {
+    return {
+      status: "error",
+      message: "Some fields need attention.",
+      fields: zodFieldErrors(form.error),
+    };
+  }
+  const { eventId, versionId } = form.data;
+  try {
+    const { user } = await requirePermission({ eventId, permission: "rule-sets.manage" });
+    const result = await pinRuleSet({ eventId, versionId, userId: user.id });
+    revalidatePath(`/organizer/${eventId}`, "layout");
+    return {
+      status: "done",
+      message:
+        result.previousVersion === null
+          ? `Version ${result.version} was already the pinned version.`
+          : `Version ${result.version} is pinned. ${result.changed} ${result.changed === 1 ? "verdict" : "verdicts"} changed; ${result.mailed} ${result.mailed === 1 ? "e-mail" : "e-mails"} sent. Phones use it once their event pack is refreshed.`,
+    };
+  } catch (error) {
+    if (error instanceof AppError) return { status: "error", message: error.message };
+    throw error;
+  }
+}

@@ -1,0 +1,41 @@
+import "server-only";
+import type { EventRuleContext } from "../../db/queries/get-event-rule-set";
+import { listEntriesForEvaluation } from "../../db/queries/list-entries-for-evaluation";
+import { listEntryRecords } from "../../db/queries/list-entry-records";
+import { displayUnits } from "../scrutineer/display-units";
+import { entryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
+import type { ReEvaluationEntry } from "../scrutineer/re-evaluate-entries";
+import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
+
+/**
+ * Everything `evaluateEntry` needs for some (or all) entries of an event except the rule set:
+ * the declared class and declarations, all the entry's records, the event date and units.
+ */
+export async function loadEvaluationEntries({
+  context,
+  entryIds,
+}: {
+  context: EventRuleContext;
+  entryIds?: string[];
+}): Promise<ReEvaluationEntry[]> {
+  const { eventId } = context;
+  const entries = await listEntriesForEvaluation({ eventId, entryIds });
+  const stored = await listEntryRecords({ eventId, entryIds: entries.map((e) => e.entryId) });
+  const byEntry = new Map<string, TechRecord[]>();
+  for (const row of stored) {
+    const parsed = recordSchema.safeParse(row);
+    if (!parsed.success) continue; // stored records were validated on the way in
+    byEntry.set(row.entryId, [...(byEntry.get(row.entryId) ?? []), parsed.data]);
+  }
+  const display = displayUnits({ length: context.unitSystem });
+  return entries.map((entry) => ({
+    entry: {
+      entryId: entry.entryId,
+      declaredClassId: entry.declaredClassId,
+      declarations: entryDeclarationsSchema.parse(entry.declarations),
+    },
+    records: byEntry.get(entry.entryId) ?? [],
+    eventDate: context.eventDate,
+    display,
+  }));
+}
