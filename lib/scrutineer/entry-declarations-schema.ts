@@ -1,5 +1,10 @@
 import { z } from "zod";
+import { convertTemperature } from "./convert-temperature";
+import { formatDecimal } from "./format-decimal";
 import { CORRECTION_STANDARDS } from "./rule-set-schema";
+
+/** Air temperatures a dyno sheet can plausibly print, in °C (exclusive). */
+const AIR_TEMPERATURE_C = { min: -60, max: 70 } as const;
 
 /** A dyno sheet as the entrant uploads it. */
 export const dynoSheetSchema = z.object({
@@ -18,7 +23,21 @@ export const dynoSheetSchema = z.object({
       vapourPressure: z
         .object({ value: z.number().min(0), unit: z.enum(["kPa", "hPa", "mbar", "inHg"]) })
         .optional(),
-      temperature: z.object({ value: z.number().gt(-60).lt(70), unit: z.enum(["C", "F"]) }),
+      temperature: z
+        .object({ value: z.number(), unit: z.enum(["C", "F"]) })
+        .superRefine((t, ctx) => {
+          // The range is in °C; a °F figure is converted before it is checked.
+          const c = convertTemperature(t.value, t.unit, "C");
+          if (c > AIR_TEMPERATURE_C.min && c < AIR_TEMPERATURE_C.max) return;
+          const [lo, hi] = [AIR_TEMPERATURE_C.min, AIR_TEMPERATURE_C.max].map((x) =>
+            formatDecimal(convertTemperature(x, "C", t.unit), 1),
+          );
+          ctx.addIssue({
+            code: "custom",
+            path: ["value"],
+            message: `The dyno sheet's air temperature must be between ${lo} °${t.unit} and ${hi} °${t.unit}`,
+          });
+        }),
     })
     .nullable()
     .default(null),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { convertLength } from "./convert-length";
+import { READING_LIMITS } from "./reading-limits";
 import type { LengthUnit } from "./unit-factors";
 
 /** What {@link parseLength} returns: millimetres, or a message a person can act on. */
@@ -37,10 +38,10 @@ const UNIT_WORDS: ReadonlyArray<[RegExp, LengthUnit]> = [
 
 const EXAMPLE = 'write it like 64.5 in, 64 1/2" or 1638.3 mm';
 
-/** Reads an unsigned amount: 64.5, .5, 1/4, 64 1/2, 64-1/2, 64½. Returns null when it is not one. */
+/** Reads an unsigned amount: 64.5, 5., .5, 1/4, 64 1/2, 64-1/2, 64½. Returns null when it is not one. */
 function parseAmount(text: string): number | { error: string } | null {
   const t = text.trim();
-  let m = /^(\d+(?:\.\d+)?|\.\d+)$/.exec(t);
+  let m = /^(\d+(?:\.\d*)?|\.\d+)$/.exec(t); // "5." is 5
   if (m?.[1] !== undefined) return Number(m[1]);
   m = /^(?:(\d+)(?:\s+|\s*-\s*))?(\d+)\s*\/\s*(\d+)$/.exec(t);
   if (m?.[2] !== undefined && m[3] !== undefined) {
@@ -62,15 +63,17 @@ function unitOf(word: string): LengthUnit | null {
 
 /**
  * Parses a length typed or spoken at the tech line into millimetres (full precision).
- * Accepts mm, cm, m, in (in, inch, "), ft (ft, ') and feet-and-inches (5' 4 1/2"), decimals,
- * fractions (1/4, 64 1/2, 64-1/2, 64½). Rejects anything else with a clear message.
+ * Accepts mm, cm, m, in (in, inch, ", ''), ft (ft, ') and feet-and-inches (5' 4 1/2"), decimals
+ * (64.5, 5.), fractions (1/4, 64 1/2, 64-1/2, 64½). Rejects anything else with a message that
+ * says what to fix: the number, the unit, or their order.
  */
 export function parseLength(text: string, options: ParseLengthOptions = {}): ParseLengthResult {
-  const maxAbsMm = options.maxAbsMm ?? 100_000;
+  const maxAbsMm = options.maxAbsMm ?? READING_LIMITS.length.max;
   const t = text
     .replace(/[−–]/g, "-")
     .replace(/[″”“]/g, '"')
     .replace(/[′’‘]/g, "'")
+    .replace(/''/g, '"') // two apostrophes for inches: 6''
     .replace(/⁄/g, "/")
     .trim()
     .replace(/([a-z])\.$/i, "$1"); // "5 in." → "5 in"
@@ -100,12 +103,29 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
   }
 
   if (mm === null) {
-    const split = /^(.*?)\s*([a-zA-Z"']+)$/.exec(body);
+    // A unit word in any script, so "12 мм" is an unknown unit rather than a missing one.
+    const split = /^(.*?)\s*([\p{L}"']+)$/u.exec(body);
     const amountText = split?.[1] ?? body;
     const unitText = split?.[2];
-    if (amountText === "" || (unitText === undefined && /[a-z]/i.test(body))) {
+    const inside = /^(.*?\d)\s*([\p{L}"']+)\s*(\d.*)$/u.exec(body);
+    if (unitText === undefined && inside?.[2] !== undefined && unitOf(inside[2]) !== null) {
+      return {
+        ok: false,
+        message: `Check the order in "${text.trim()}": the unit goes after the number, and feet before inches (5' 3"); ${EXAMPLE}.`,
+      };
+    }
+    if (amountText === "" || (unitText === undefined && /\p{L}/u.test(body))) {
       return { ok: false, message: `Could not read "${text.trim()}" as a length; ${EXAMPLE}.` };
     }
+    const amount = parseAmount(amountText);
+    if (amount === null) {
+      return {
+        ok: false,
+        message: `Could not read the number in "${text.trim()}"; ${EXAMPLE}.`,
+      };
+    }
+    if (typeof amount !== "number")
+      return { ok: false, message: `Check "${text.trim()}": ${amount.error}.` };
     if (unitText !== undefined) {
       unit = unitOf(unitText);
       if (unit === null) {
@@ -116,12 +136,6 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
     } else {
       return { ok: false, message: `Add a unit, mm or in; ${EXAMPLE}.` };
     }
-    const amount = parseAmount(amountText);
-    if (amount === null) {
-      return { ok: false, message: `Could not read "${text.trim()}" as a length; ${EXAMPLE}.` };
-    }
-    if (typeof amount !== "number")
-      return { ok: false, message: `Check "${text.trim()}": ${amount.error}.` };
     mm = convertLength(amount, unit, "mm");
   }
 

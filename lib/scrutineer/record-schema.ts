@@ -1,5 +1,7 @@
 import { z } from "zod";
+import { CORNER_LABELS, DIMENSION_LABELS } from "./dimension-labels";
 import { equipmentLabelSchema } from "./equipment-label-schema";
+import { READING_LIMITS } from "./reading-limits";
 
 /** Length dimensions a scrutineer reads, all in millimetres. */
 export const LENGTH_DIMENSIONS = [
@@ -47,27 +49,60 @@ export const readingConditionsSchema = z.object({
 
 const common = { instrument: instrumentSchema, conditions: readingConditionsSchema.optional() };
 
-/** One measured value of one named dimension. */
+const UNKNOWN_DIMENSION = `Unknown dimension; a reading is one of: ${Object.values(DIMENSION_LABELS).join(", ")}`;
+
+/** The cap that applies to a dimension's readings (and to its instrument's uncertainty). */
+function limitOf(dimension: Dimension): { max: number; unit: string } {
+  if (dimension === "cornerWeightKg") return READING_LIMITS.cornerWeight;
+  if (dimension === "noiseDbA") return READING_LIMITS.noise;
+  return READING_LIMITS.length;
+}
+
+/**
+ * One measured value of one named dimension: a finite number within a plausible magnitude
+ * ({@link READING_LIMITS}), not negative unless the dimension is signed. Messages name the
+ * dimension as people do ("The wing span cannot be negative").
+ */
 export const readingPayloadSchema = z
-  .discriminatedUnion("dimension", [
-    z.object({ dimension: z.enum(LENGTH_DIMENSIONS), value: z.number().finite(), ...common }),
-    z.object({
-      dimension: z.literal("cornerWeightKg"),
-      corner: z.enum(CORNERS),
-      value: z.number().finite().min(0),
-      ...common,
-    }),
-    z.object({ dimension: z.literal("noiseDbA"), value: z.number().finite().min(0), ...common }),
-  ])
+  .discriminatedUnion(
+    "dimension",
+    [
+      z.object({ dimension: z.enum(LENGTH_DIMENSIONS), value: z.number(), ...common }),
+      z.object({
+        dimension: z.literal("cornerWeightKg"),
+        corner: z.enum(CORNERS, {
+          error: `Say which corner: ${Object.values(CORNER_LABELS).join(", ")}`,
+        }),
+        value: z.number(),
+        ...common,
+      }),
+      z.object({ dimension: z.literal("noiseDbA"), value: z.number(), ...common }),
+    ],
+    { error: (issue) => (issue.code === "invalid_union" ? UNKNOWN_DIMENSION : undefined) },
+  )
   .superRefine((r, ctx) => {
-    if (r.dimension !== "cornerWeightKg" && r.dimension !== "noiseDbA") {
-      if (r.value < 0 && !SIGNED_DIMENSIONS.includes(r.dimension)) {
-        ctx.addIssue({
-          code: "custom",
-          path: ["value"],
-          message: `${r.dimension} cannot be negative`,
-        });
-      }
+    const label = DIMENSION_LABELS[r.dimension];
+    const { max, unit } = limitOf(r.dimension);
+    const signed =
+      r.dimension !== "cornerWeightKg" && r.dimension !== "noiseDbA"
+        ? SIGNED_DIMENSIONS.includes(r.dimension)
+        : false;
+    if (r.value < 0 && !signed) {
+      ctx.addIssue({ code: "custom", path: ["value"], message: `The ${label} cannot be negative` });
+    }
+    if (Math.abs(r.value) > max) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["value"],
+        message: `The ${label} cannot be more than ${max} ${unit}; check the number and unit`,
+      });
+    }
+    if (r.instrument.standardUncertainty > max) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["instrument", "standardUncertainty"],
+        message: `An instrument's uncertainty for the ${label} cannot be more than ${max} ${unit}`,
+      });
     }
   });
 /** See {@link readingPayloadSchema}. */
@@ -77,7 +112,15 @@ export type ReadingPayload = z.infer<typeof readingPayloadSchema>;
 export const checklistPayloadSchema = z.object({
   itemId: z.string().min(1),
   result: z.enum(["pass", "fail", "not-applicable"]),
-  equipment: z.object({ standardId: z.string().min(1), label: equipmentLabelSchema }).optional(),
+  equipment: z
+    .object({
+      standardId: z.string().min(1),
+      /** The standard's name as the scrutineer saw it, so a reason can name it even if a later
+       * rule-set version no longer lists the id. */
+      standardName: z.string().max(200).optional(),
+      label: equipmentLabelSchema,
+    })
+    .optional(),
   comment: z.string().max(2000).optional(),
 });
 /** See {@link checklistPayloadSchema}. */

@@ -168,6 +168,85 @@ describe("record schema", () => {
   });
 });
 
+describe("reading values a person can trust", () => {
+  const tape = { id: "t", name: "Tape", standardUncertainty: 1 };
+  const issues = (payload: object) =>
+    (recordSchema.safeParse({ ...header, kind: "reading", payload }).error?.issues ?? []).map(
+      (i) => [i.path.join("."), i.message],
+    );
+
+  it("refuses a length beyond 100 m, so two huge readings cannot overflow to Infinity", () => {
+    // Source: common practice (no source) — no car is 100 m long; 1.7e308 + 1.7e308 overflows IEEE 754 doubles
+    expect(issues({ dimension: "wingSpanMm", value: 1.7e308, instrument: tape })).toEqual([
+      ["payload.value", "The wing span cannot be more than 100000 mm; check the number and unit"],
+    ]);
+    expect(issues({ dimension: "wingSpanMm", value: 100_000, instrument: tape })).toEqual([]);
+    expect(
+      issues({
+        dimension: "bodyWidthMm",
+        value: 1700,
+        instrument: { ...tape, standardUncertainty: 1e300 },
+      }).map(([path]) => path),
+    ).toEqual(["payload.instrument.standardUncertainty"]);
+  });
+
+  it("caps corner weights and noise readings at plausible values", () => {
+    // Source: common practice (no source) — a car's corner weighs well under 2000 kg; a static noise test reads well under 150 dB(A)
+    expect(
+      issues({ dimension: "cornerWeightKg", corner: "lf", value: 2500, instrument: tape }),
+    ).toEqual([
+      ["payload.value", "The corner weight cannot be more than 2000 kg; check the number and unit"],
+    ]);
+    expect(issues({ dimension: "noiseDbA", value: 1e6, instrument: tape })).toEqual([
+      ["payload.value", "The noise cannot be more than 150 dB(A); check the number and unit"],
+    ]);
+    expect(
+      issues({ dimension: "cornerWeightKg", corner: "lf", value: -1, instrument: tape }),
+    ).toEqual([["payload.value", "The corner weight cannot be negative"]]);
+  });
+
+  it("words field messages with the people's names for dimensions, not internal ones", () => {
+    const negative = issues({ dimension: "wingSpanMm", value: -5, instrument: tape });
+    expect(negative).toEqual([["payload.value", "The wing span cannot be negative"]]);
+    const unknown = issues({ dimension: "wingColour", value: 5, instrument: tape });
+    expect(unknown).toHaveLength(1);
+    expect(unknown[0]?.[0]).toBe("payload.dimension");
+    expect(unknown[0]?.[1]).toMatch(/^Unknown dimension; a reading is one of: wing top height/);
+    expect(unknown[0]?.[1]).not.toMatch(/Mm\b|DbA|Kg\b/);
+  });
+});
+
+describe("dyno sheet air temperature", () => {
+  const sheet = (value: number, unit: "C" | "F") => ({
+    dynoSheet: {
+      power: { value: 250, unit: "hp" },
+      measuredAt: "wheel",
+      correction: "std",
+      ambient: { pressure: { value: 29.5, unit: "inHg" }, temperature: { value, unit } },
+      date: "2026-04-01",
+    },
+  });
+
+  it("checks the range after converting °F, and names the unit in the message", () => {
+    // Source: NIST SP 811 App. B.8 — t/°C = (t/°F − 32)/1.8: 85 °F = 29.4 °C, 100 °F = 37.8 °C
+    expect(entryDeclarationsSchema.safeParse(sheet(85, "F")).success).toBe(true);
+    expect(entryDeclarationsSchema.safeParse(sheet(100, "F")).success).toBe(true);
+    // The −60 to 70 °C bound is a plausibility check: common practice (no source).
+    // −80 °F = −62.2 °C, below −60 °C = −76 °F; 160 °F = 71.1 °C, above 70 °C = 158 °F
+    const cold = entryDeclarationsSchema.safeParse(sheet(-80, "F"));
+    expect(cold.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([
+      [
+        "dynoSheet.ambient.temperature.value",
+        "The dyno sheet's air temperature must be between -76 °F and 158 °F",
+      ],
+    ]);
+    expect(entryDeclarationsSchema.safeParse(sheet(160, "F")).success).toBe(false);
+    expect(entryDeclarationsSchema.safeParse(sheet(71, "C")).error?.issues[0]?.message).toBe(
+      "The dyno sheet's air temperature must be between -60 °C and 70 °C",
+    );
+  });
+});
+
 describe("declarations and display", () => {
   it("fills declaration defaults", () => {
     expect(entryDeclarationsSchema.parse({})).toEqual({

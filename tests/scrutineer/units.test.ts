@@ -89,17 +89,41 @@ describe("parseLength", () => {
       ["", /enter a length/i],
       ["abc", /could not read/i],
       ["12 furlongs", /unknown unit "furlongs"/i],
-      ["64..5 in", /could not read/i],
+      ["64..5 in", /could not read the number/i],
       ["1/0 in", /0 below the line/i],
       ["1,638.3 mm", /point for decimals/i],
       ["5000 m", /longer than any car/i],
-      ["1 m 20", /could not read/i],
+      ["1 m 20", /check the order/i],
     ];
     for (const [text, message] of cases) {
       const r = parseLength(text);
       expect(r.ok, text).toBe(false);
       if (!r.ok) expect(r.message, text).toMatch(message);
     }
+  });
+
+  it("reads two apostrophes as inches and a number ending in a point", () => {
+    // Source: common practice (no source) — '' typed for " on keyboards without it
+    expect(parseLength("6''")).toEqual({ ok: true, mm: 6 * 25.4, unit: "in" }); // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly
+    expect(parseLength("5' 4''")).toMatchObject({ ok: true, unit: "in" });
+    const r = parseLength("5. in");
+    expect(r).toEqual({ ok: true, mm: 127, unit: "in" }); // Source: NIST SP 811 App. B.8 — 5 in = 127 mm
+  });
+
+  it("says which part to fix: the number, the unit, or the order", () => {
+    const message = (text: string) => {
+      const r = parseLength(text);
+      return r.ok ? "accepted" : r.message;
+    };
+    // A malformed number is the number's fault, with or without a unit.
+    expect(message("12..5")).toMatch(/^Could not read the number in "12\.\.5"/);
+    expect(message("12..5")).not.toMatch(/add a unit/i);
+    // A unit typed in another script is an unknown unit, not a missing one.
+    expect(message("12 мм")).toMatch(/^Unknown unit "мм"/);
+    // Inches before a bare number: the order is wrong.
+    expect(message('5" 3')).toMatch(
+      /^Check the order in "5" 3": the unit goes after the number, and feet before inches/,
+    );
   });
 
   it("offers the parser as a zod schema with the message as the issue", () => {
