@@ -61,7 +61,10 @@ export function ChecklistItemForm({
     if (item.equipment && outcome === "pass") {
       const l = label();
       if (typeof l === "string") return setError(l);
-      payload = { ...payload, equipment: { standardId, label: l } };
+      payload = {
+        ...payload,
+        equipment: { standardId, ...(standard ? { standardName: standard.name } : {}), label: l },
+      };
     }
     setError(null);
     await record(
@@ -94,7 +97,7 @@ export function ChecklistItemForm({
           {item.required ? "" : " (if fitted)"}
         </p>
         {item.guidance ? <p className="text-base text-asphalt-800">{item.guidance}</p> : null}
-        {result && result.outcome !== "waiting" ? (
+        {result && (result.outcome !== "waiting" || result.recordId !== null) ? (
           <p className="text-base font-semibold">{result.reason}</p>
         ) : null}
       </div>

@@ -86,7 +86,7 @@ export function VerdictView({
         </ul>
         {verdict.missing.length > 0 ? (
           <p className="mt-2 text-base">
-            <strong>Still to record:</strong> {verdict.missing.join(", ")}
+            <strong>Still to do:</strong> {verdict.missing.join(", ")}
           </p>
         ) : null}
       </details>

@@ -1,6 +1,7 @@
 import { daysBetweenDates } from "./days-between-dates";
 import type { EquipmentLabel } from "./equipment-label-schema";
 import { equipmentValidThrough } from "./equipment-valid-through";
+import { labelReadingProblem } from "./label-reading-problem";
 import type { SafetyStandard } from "./safety-rules-schema";
 
 /** Validity of one item on the event date. */
@@ -10,13 +11,14 @@ export type EquipmentValidity = {
   validThrough: string | null;
   /** Days from the event date to the last valid day (0 = the event day is the last). */
   daysLeft: number | null;
-  /** Why the label could not be read, when unreadable. */
+  /** Why the label cannot be trusted as read, when unreadable; follows the item's name ("label recorded as …"). */
   problem: string | null;
 };
 
 /**
  * Whether certified equipment is valid on the event date (the venue's calendar date):
- * expired after its last valid day; "expires-soon" when the last valid day is no more than
+ * unreadable when the label was recorded in another form than the standard's or dated after the
+ * event day (re-read it; never computed as if valid); expired after its last valid day; "expires-soon" when the last valid day is no more than
  * `warningDays` after the event date; otherwise valid.
  * @param eventDate ISO "YYYY-MM-DD" in the venue's time zone
  */
@@ -26,6 +28,9 @@ export function checkEquipmentValidity(args: {
   eventDate: string;
   warningDays: number;
 }): EquipmentValidity {
+  const problem = labelReadingProblem(args);
+  if (problem !== null)
+    return { status: "unreadable", validThrough: null, daysLeft: null, problem };
   const through = equipmentValidThrough(args.label, args.standard.policy);
   if (!through.ok)
     return { status: "unreadable", validThrough: null, daysLeft: null, problem: through.reason };

@@ -11,14 +11,24 @@ type PowerRule = NonNullable<RuleSet["powerToWeight"]>;
 
 /** The power figure the class compares, or why it cannot be had yet. */
 export type CorrectedPower =
-  | { ok: true; powerKw: number; correctionFactor: number | null; measuredAt: "wheel" | "crank" }
+  | {
+      ok: true;
+      powerKw: number;
+      /** What the sheet's figure was multiplied by to reach the rule's correction standard
+       * (CF_rule / CF_sheet), or null when the sheet already used it. */
+      correctionMultiplier: number | null;
+      /** The rule's crank-to-wheel factor when it was used (crank × f = wheel), else null. */
+      crankToWheelFactor: number | null;
+      measuredAt: "wheel" | "crank";
+    }
   | { ok: false; missing: string[]; reason: string };
 
 /**
  * Brings a declared dyno figure to the basis the rule set asks for: the required correction
  * standard (re-correcting through observed power with the sheet's pressure and temperature when
  * the sheet used another), and wheel or crank power (only when the rule gives a conversion factor).
- * A sheet older than the rule's validity on the event date is not accepted.
+ * A sheet dated after the event day, or older than the rule's validity on the event date, is not
+ * accepted.
  * @param eventDate ISO date of the event (venue-local)
  */
 export function correctedPowerKw(
@@ -28,6 +38,13 @@ export function correctedPowerKw(
 ): CorrectedPower {
   if (sheet === null) {
     return { ok: false, missing: ["dyno sheet"], reason: "waiting for the dyno sheet" };
+  }
+  if (sheet.date > eventDate) {
+    return {
+      ok: false,
+      missing: ["a dyno sheet dated on or before the event day"],
+      reason: `the dyno sheet is dated ${sheet.date}, after the event day (${eventDate}); it is not accepted — check the date on the sheet`,
+    };
   }
   if (
     rule.dynoSheetValidYears !== null &&
@@ -39,8 +56,10 @@ export function correctedPowerKw(
       reason: `the dyno sheet dated ${sheet.date} is older than ${rule.dynoSheetValidYears} years; a current sheet is needed`,
     };
   }
-  let powerKw = convertPower(sheet.power.value, sheet.power.unit, "kW");
-  let factor: number | null = null;
+  const sheetKw = convertPower(sheet.power.value, sheet.power.unit, "kW");
+  let powerKw = sheetKw;
+  let correctionMultiplier: number | null = null;
+  let crankToWheelFactor: number | null = null;
   if (sheet.correction !== rule.correction) {
     if (sheet.ambient === null) {
       return {
@@ -63,9 +82,10 @@ export function correctedPowerKw(
       sheet.correction === "uncorrected"
         ? powerKw
         : powerKw / dynoCorrectionFactor(sheet.correction, conditions);
-    factor =
+    const factor =
       rule.correction === "uncorrected" ? 1 : dynoCorrectionFactor(rule.correction, conditions);
     powerKw = observed * factor;
+    correctionMultiplier = powerKw / sheetKw;
   }
   if (sheet.measuredAt !== rule.powerMeasuredAt) {
     if (rule.crankToWheelFactor === null) {
@@ -75,10 +95,17 @@ export function correctedPowerKw(
         reason: `the dyno sheet gives ${sheet.measuredAt} power; this rule set needs ${rule.powerMeasuredAt} power`,
       };
     }
+    crankToWheelFactor = rule.crankToWheelFactor;
     powerKw =
       sheet.measuredAt === "crank"
         ? powerKw * rule.crankToWheelFactor
         : powerKw / rule.crankToWheelFactor;
   }
-  return { ok: true, powerKw, correctionFactor: factor, measuredAt: rule.powerMeasuredAt };
+  return {
+    ok: true,
+    powerKw,
+    correctionMultiplier,
+    crankToWheelFactor,
+    measuredAt: rule.powerMeasuredAt,
+  };
 }

@@ -30,3 +30,10 @@ export const CORRECTION_NAMES = {
   std: DYNO_CORRECTION_STANDARDS.std.name,
   uncorrected: "uncorrected (observed)",
 } as const;
+
+/** Short names for the correction options, for use inside a reason's parentheses. */
+export const CORRECTION_SHORT_NAMES = {
+  "sae-j1349": DYNO_CORRECTION_STANDARDS["sae-j1349"].name,
+  std: "STD",
+  uncorrected: "uncorrected",
+} as const;

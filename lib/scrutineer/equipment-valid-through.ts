@@ -38,22 +38,22 @@ export function equipmentValidThrough(label: EquipmentLabel, policy: ExpiryPolic
     case "end-of-label-year":
     case "years-after-label-year": {
       if (label.form === "date")
-        return { ok: false, reason: "the policy reads a label year, not a date" };
+        return { ok: false, reason: "label gives a date, but the expiry policy reads a year" };
       const year = labelYear(label);
-      if (year === null) return { ok: false, reason: "the label gives no year" };
+      if (year === null) return { ok: false, reason: "label gives no year" };
       const add = policy.kind === "end-of-label-year" ? 0 : policy.years;
       return { ok: true, validThrough: `${year + add}-12-31` };
     }
     case "years-from-label-month": {
       const ym = labelMonth(label);
-      if (ym === null) return { ok: false, reason: "the label gives no month and year" };
+      if (ym === null) return { ok: false, reason: "label gives no month and year" };
       return { ok: true, validThrough: endOfMonthDate(ym.year + policy.years, ym.month) };
     }
     case "years-from-label-date": {
       if (label.form === "date")
         return { ok: true, validThrough: addYearsToDate(label.date, policy.years) };
       const ym = labelMonth(label);
-      if (ym === null) return { ok: false, reason: "the label gives no date" };
+      if (ym === null) return { ok: false, reason: "label gives no date" };
       return { ok: true, validThrough: endOfMonthDate(ym.year + policy.years, ym.month) };
     }
   }

@@ -72,7 +72,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     ...new Set([
       ...(endCheck?.rules.flatMap((r) => (r.outcome === "waiting" ? r.missing : [])) ?? []),
       ...eventRules.flatMap((r) => (r.outcome === "waiting" ? r.missing : [])),
-      ...safety.items.filter((s) => s.outcome === "waiting").map((s) => s.label),
+      ...safety.items.flatMap((s) => (s.outcome === "waiting" ? s.missing : [])),
     ]),
   ];
   const summaries = [...dimensions.values()];

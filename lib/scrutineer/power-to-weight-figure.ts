@@ -3,10 +3,9 @@ import { convertMass } from "./convert-mass";
 import { convertPower } from "./convert-power";
 import { powerToWeightUnitParts } from "./convert-power-to-weight";
 import { correctedPowerKw } from "./corrected-power-kw";
+import { describeDynoPower } from "./describe-dyno-power";
 import type { DisplayUnits } from "./display-units";
-import { CORRECTION_NAMES } from "./dyno-correction-standards";
 import type { EntryDeclarations } from "./entry-declarations-schema";
-import { formatDecimal } from "./format-decimal";
 import type { RuleSet } from "./rule-set-schema";
 import type { DimensionMap } from "./summarise-dimensions";
 import { vehicleWeightKg } from "./vehicle-weight-kg";
@@ -14,7 +13,9 @@ import { vehicleWeightKg } from "./vehicle-weight-kg";
 /**
  * The entry's power-to-weight ratio in the rule set's unit (mass per power), from the corner
  * scales and the declared dyno figure on the rule's basis; u follows the weight's relative
- * uncertainty (the declared power carries none). Null when the rule set has no such rule.
+ * uncertainty (the declared power carries none). The description shows the weight (in kg for a
+ * kg-based rule, else the event's unit) and how the power came from the sheet (correction
+ * multiplier, crank-to-wheel factor). Null when the rule set has no such rule.
  */
 export function powerToWeightFigure(args: {
   ruleSet: RuleSet;
@@ -25,13 +26,12 @@ export function powerToWeightFigure(args: {
 }): PowerToWeightFigure | null {
   const rule = args.ruleSet.powerToWeight;
   if (rule === null) return null;
-  const weight = vehicleWeightKg(
-    args.dimensions,
-    args.declarations,
-    args.ruleSet,
-    args.display.mass,
-  );
-  const power = correctedPowerKw(args.declarations.dynoSheet, rule, args.eventDate);
+  const parts = powerToWeightUnitParts(rule.unit);
+  // A kg-based rule is explained in kg, whatever the event shows, so its arithmetic can be followed.
+  const massUnit = parts.mass === "kg" ? "kg" : args.display.mass;
+  const weight = vehicleWeightKg(args.dimensions, args.declarations, args.ruleSet, massUnit);
+  const sheet = args.declarations.dynoSheet;
+  const power = correctedPowerKw(sheet, rule, args.eventDate);
   if (!weight.ok || !power.ok) {
     const missing = [...(weight.ok ? [] : weight.missing), ...(power.ok ? [] : power.missing)];
     const reasons = [...(weight.ok ? [] : [weight.reason]), ...(power.ok ? [] : [power.reason])];
@@ -44,15 +44,15 @@ export function powerToWeightFigure(args: {
       reason: "the weight or power is not positive",
     };
   }
-  const parts = powerToWeightUnitParts(rule.unit);
   const mass = convertMass(weight.measurand.value, "kg", parts.mass);
   const powerInUnit = convertPower(power.powerKw, "kW", parts.power);
   const ratio = mass / powerInUnit;
   const u = ratio * (weight.measurand.standardUncertainty / weight.measurand.value);
-  const where = power.measuredAt === "wheel" ? "at the wheels" : "at the crank";
+  const powerText =
+    sheet === null ? "" : describeDynoPower({ sheet, power, rule, powerUnit: parts.power });
   return {
     ok: true,
     measurand: { value: ratio, standardUncertainty: u, parts: weight.measurand.parts },
-    description: `${weight.description}; ${formatDecimal(powerInUnit, 1)} ${parts.power} ${where}, ${CORRECTION_NAMES[rule.correction]}`,
+    description: `${weight.description}; ${powerText}`,
   };
 }

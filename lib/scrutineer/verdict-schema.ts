@@ -110,6 +110,8 @@ export const safetyItemResultSchema = z.object({
       daysLeft: z.number().int().nullable(),
     })
     .nullable(),
+  /** What is still needed before the item can be decided ("re-read the harness label"). */
+  missing: z.array(z.string()),
   reason: z.string(),
 });
 /** See {@link safetyItemResultSchema}. */

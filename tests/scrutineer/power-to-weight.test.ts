@@ -115,6 +115,26 @@ describe("correctedPowerKw", () => {
   });
 });
 
+describe("dyno sheets that cannot be used", () => {
+  it("does not accept a sheet dated after the event day", () => {
+    // Source: common practice (no source) — a dyno run cannot happen after the day it is presented
+    const s = dynoSheetSchema.parse({
+      power: { value: 200, unit: "hp" },
+      measuredAt: "wheel",
+      correction: "sae-j1349",
+      date: "2026-05-17",
+    });
+    const p = correctedPowerKw(s, ptwRule(), "2026-05-16");
+    expect(p).toEqual({
+      ok: false,
+      missing: ["a dyno sheet dated on or before the event day"],
+      reason:
+        "the dyno sheet is dated 2026-05-17, after the event day (2026-05-16); it is not accepted — check the date on the sheet",
+    });
+    expect(correctedPowerKw({ ...s, date: "2026-05-16" }, ptwRule(), "2026-05-16").ok).toBe(true);
+  });
+});
+
 describe("power-to-weight through evaluateEntry", () => {
   const corners = (kg: Record<Corner, number>, u = 1): TechRecord[] =>
     (Object.entries(kg) as Array<[Corner, number]>).map(([corner, value], i) =>
@@ -163,7 +183,72 @@ describe("power-to-weight through evaluateEntry", () => {
     expect(ptw?.outcome).toBe("pass");
     expect(v.status).toBe("cleared");
     expect(ptw?.reason).toMatch(
-      /^Power-to-weight 14\.11 lb\/hp \(1280 kg with driver: 1200 kg on the scales \+ 80 kg declared driver; 200 hp at the wheels, SAE J1349\); minimum 14 lb\/hp; 0\.11 lb\/hp inside\.$/,
+      /^Power-to-weight 14\.11 lb\/hp \(1280 kg with driver: 1200 kg on the scales \+ 80 kg declared driver; 200 hp at the wheels on the sheet \(SAE J1349\)\); minimum 14 lb\/hp; 0\.11 lb\/hp inside\.$/,
+    );
+  });
+
+  it("shows the sheet's figure and the correction multiplier when the sheet used another standard", () => {
+    // Source: SAE J1349 JUN90 as quoted in dyno literature — CF = 1.18 × (990/Pd) × √((T + 273)/298) − 0.18,
+    // exactly 1 at 99 kPa dry air and 25 °C; STD: CF = (29.92/P[inHg]) × √((T[°F] + 460)/520).
+    // NIST SP 811 App. B.8 — 1 inHg = 3.386389 kPa; 25 °C = 77 °F.
+    const cfStd = (29.92 / (99 / 3.386389)) * Math.sqrt((77 + 460) / 520);
+    const multiplier = 1 / cfStd; // STD figure → observed → × CF_J1349 (= 1)
+    expect(multiplier).toBeCloseTo(0.9615, 4); // STD reads about 4 % higher (DOMAIN.md, dyno literature)
+    const stdSheet: EntryDeclarationsInput = {
+      driverWeightKg: 80,
+      dynoSheet: {
+        power: { value: 250, unit: "hp" },
+        measuredAt: "wheel",
+        correction: "std",
+        ambient: { pressure: { value: 99, unit: "kPa" }, temperature: { value: 25, unit: "C" } },
+        date: "2025-09-01",
+      },
+    };
+    const v = evaluateEntry(
+      input({
+        ruleSet: rules(5),
+        records: corners(weights),
+        declaredClassId: "club",
+        declarations: stdSheet,
+      }),
+    );
+    const ptw = v.classChecks[0]?.rules.find((r) => r.ruleId === "power-to-weight");
+    const corrected = (250 * multiplier).toFixed(1); // 240.4 hp
+    expect(ptw?.reason).toContain(
+      `; 250 hp at the wheels on the sheet (STD), × 0.9615 to SAE J1349 = ${corrected} hp at the wheels)`,
+    );
+  });
+
+  it("shows the crank-to-wheel factor when it is used, and a kg-based rule's weight in kg", () => {
+    // Source: NIST SP 811 App. B.8 — 1 PS = 735.49875 W, 1 hp = 745.69987158227 W: 300 PS = 295.9 hp;
+    // × 0.85 (the rule's crank-to-wheel factor, a rule-set value) = 251.5 hp at the wheels.
+    const base = rules(5);
+    const ruleSet: RuleSetInput = {
+      ...base,
+      powerToWeight: ptwRule({ unit: "kg/hp", crankToWheelFactor: 0.85 }),
+    };
+    const crankSheet: EntryDeclarationsInput = {
+      driverWeightKg: 80,
+      dynoSheet: {
+        power: { value: 300, unit: "PS" },
+        measuredAt: "crank",
+        correction: "sae-j1349",
+        date: "2025-09-01",
+      },
+    };
+    const v = evaluateEntry(
+      input({
+        ruleSet,
+        records: corners(weights),
+        declaredClassId: "club",
+        declarations: crankSheet,
+        length: "in",
+      }),
+    );
+    expect(v.display.mass).toBe("lb");
+    const ptw = v.classChecks[0]?.rules.find((r) => r.ruleId === "power-to-weight");
+    expect(ptw?.reason).toContain(
+      "(1280 kg with driver: 1200 kg on the scales + 80 kg declared driver; 300 PS at the crank on the sheet (SAE J1349) = 295.9 hp, × 0.85 crank to wheels = 251.5 hp at the wheels)",
     );
   });
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { checkEquipmentValidity } from "@/lib/scrutineer/check-equipment-validity";
 import type { EquipmentLabel } from "@/lib/scrutineer/equipment-label-schema";
 import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
+import type { TechRecord } from "@/lib/scrutineer/record-schema";
 import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
 import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
 import type { SafetyStandard } from "@/lib/scrutineer/safety-rules-schema";
@@ -274,5 +275,195 @@ describe("safety in the verdict", () => {
     });
     expect(r.success).toBe(false);
     expect(r.error?.issues[0]?.path).toEqual(["safety", "standards", 0, "policy"]);
+  });
+});
+
+describe("labels that must be re-read, and safety wording", () => {
+  // Source: Motorsport UK NCR 2026 Ch.7 App.7 Arts 10.4–10.7 — FIA 8853-2016 at national events:
+  // up to 5 years after the label year, the label carrying the year of manufacture.
+  const fia8853_2016 = {
+    id: "fia-8853-2016",
+    name: "FIA 8853-2016",
+    item: "harness",
+    labelForm: "manufacture-year",
+    policy: { kind: "years-after-label-year", years: 5 },
+  } as const;
+  // Source: FIA Appendix J Art. 253 as quoted — seat FIA 8855-1999: 5 years from the label's manufacture date
+  const fia8855_1999 = {
+    id: "fia-8855-1999",
+    name: "FIA 8855-1999",
+    item: "seat",
+    labelForm: "manufacture-month",
+    policy: { kind: "years-from-label-month", years: 5 },
+  } as const;
+  // Source: Motorsport UK NCR 2026 Ch.7 App.6 Arts 3.3–4.1 — extinguisher check date ≤ 2 years old
+  const extinguisherCheck = {
+    id: "extinguisher-service",
+    name: "Extinguisher service check",
+    item: "extinguisher",
+    labelForm: "date",
+    policy: { kind: "years-from-label-date", years: 2 },
+  } as const;
+  const rules = (): RuleSetInput => ({
+    ...clubRuleSet(),
+    safety: {
+      expiryWarningDays: 30,
+      standards: [fia8853_2016, fia8855_1999, extinguisherCheck],
+      checklist: [
+        { id: "harness", label: "Harness", equipment: { acceptedStandardIds: ["fia-8853-2016"] } },
+        {
+          id: "seat",
+          label: "Seat",
+          required: false,
+          equipment: { acceptedStandardIds: ["fia-8855-1999"] },
+        },
+        {
+          id: "extinguisher",
+          label: "Fire extinguisher",
+          required: false,
+          equipment: { acceptedStandardIds: ["extinguisher-service"] },
+        },
+      ],
+    },
+  });
+  const aeroOk = [
+    lengthReading(1, "wingTopFromGroundMm", 1400),
+    lengthReading(2, "roofPeakFromGroundMm", 1300),
+    lengthReading(3, "wingOverhangMm", 50),
+    lengthReading(4, "wingSpanMm", 1500),
+    lengthReading(5, "bodyWidthMm", 1600),
+  ];
+  const item = (
+    n: number,
+    itemId: string,
+    equipment?: Extract<TechRecord, { kind: "checklist" }>["payload"]["equipment"],
+  ) => checklist(n, { itemId, result: "pass", ...(equipment ? { equipment } : {}) });
+  const judge = (records: TechRecord[], eventDate: string) =>
+    evaluateEntry(
+      input({
+        ruleSet: rules(),
+        records: [...aeroOk, ...records],
+        declaredClassId: "club",
+        eventDate,
+      }),
+    );
+
+  it("never passes a label recorded in another form than the standard's: it is re-read", () => {
+    // Read as "not valid after 2030", an 8853-2016 label would run to 2035-12-31 — but its year is
+    // the year of manufacture, so the harness may have expired long before. It must not pass.
+    const v = judge(
+      [
+        item(6, "harness", {
+          standardId: "fia-8853-2016",
+          label: { form: "not-valid-after-year", year: 2030 },
+        }),
+      ],
+      "2032-06-01",
+    );
+    const harness = v.safety.find((s) => s.itemId === "harness");
+    expect(harness?.outcome).toBe("waiting");
+    expect(harness?.equipment).toMatchObject({ status: "unreadable", validThrough: null });
+    expect(harness?.reason).toBe(
+      'Harness label recorded as "not valid after 2030", but FIA 8853-2016 labels carry the year of manufacture; re-read the label.',
+    );
+    expect(v.status).toBe("waiting");
+    expect(v.missing).toEqual(["re-read the harness label"]);
+    expect(v.reason).toBe("Waiting — still to do: re-read the harness label.");
+  });
+
+  it("re-reads a label dated after the event day", () => {
+    const harnessMade = (year: number) =>
+      item(6, "harness", {
+        standardId: "fia-8853-2016",
+        label: { form: "manufacture-year", year },
+      });
+    // Source: common practice (no source) — a label cannot carry a manufacture date later than the day it is read
+    const future = judge([harnessMade(2027)], "2026-05-16");
+    expect(future.safety[0]?.reason).toBe(
+      "Harness label recorded as made 2027, after the event day (2026-05-16); re-read the label.",
+    );
+    expect(future.status).toBe("waiting");
+    expect(judge([harnessMade(2026)], "2026-05-16").status).toBe("cleared");
+
+    const seatMade = (year: number, month: number) =>
+      item(7, "seat", {
+        standardId: "fia-8855-1999",
+        label: { form: "manufacture-month", year, month },
+      });
+    const seat = (v: ReturnType<typeof judge>) => v.safety.find((s) => s.itemId === "seat");
+    expect(
+      seat(judge([harnessMade(2025), seatMade(2026, 6)], "2026-05-16"))?.equipment?.status,
+    ).toBe("unreadable");
+    expect(seat(judge([harnessMade(2025), seatMade(2026, 5)], "2026-05-16"))?.outcome).toBe("pass");
+
+    const checked = (date: string) =>
+      item(8, "extinguisher", {
+        standardId: "extinguisher-service",
+        label: { form: "date", date },
+      });
+    const ext = (v: ReturnType<typeof judge>) => v.safety.find((s) => s.itemId === "extinguisher");
+    expect(ext(judge([harnessMade(2025), checked("2026-05-17")], "2026-05-16"))?.outcome).toBe(
+      "waiting",
+    );
+    expect(ext(judge([harnessMade(2025), checked("2026-05-16")], "2026-05-16"))?.outcome).toBe(
+      "pass",
+    );
+  });
+
+  it("names the extinguisher once, and counts a single day as a day", () => {
+    // Source: Motorsport UK NCR 2026 Ch.7 App.6 Arts 3.3–4.1 — checked 2024-05-17 + 2 years → valid through 2026-05-17
+    const v = judge(
+      [
+        item(6, "harness", {
+          standardId: "fia-8853-2016",
+          label: { form: "manufacture-year", year: 2025 },
+        }),
+        item(7, "extinguisher", {
+          standardId: "extinguisher-service",
+          label: { form: "date", date: "2024-05-17" },
+        }),
+      ],
+      "2026-05-16",
+    );
+    expect(v.safety.find((s) => s.itemId === "extinguisher")?.reason).toBe(
+      "Fire extinguisher service check (dated 2024-05-17): valid through 2026-05-17 — expires in 1 day.",
+    );
+  });
+
+  it("asks for the item's standard and label by name when a pass is recorded without them", () => {
+    const v = judge([item(6, "harness")], "2026-05-16");
+    expect(v.status).toBe("waiting");
+    expect(v.missing).toEqual(["record the harness standard and label"]);
+    expect(v.reason).toBe("Waiting — still to do: record the harness standard and label.");
+  });
+
+  it("says a standard is not accepted without showing an internal id", () => {
+    const unknown = judge(
+      [
+        item(6, "harness", {
+          standardId: "made-up-std",
+          standardName: "Made-up harness standard",
+          label: { form: "manufacture-year", year: 2024 },
+        }),
+      ],
+      "2026-05-16",
+    );
+    expect(unknown.status).toBe("held");
+    expect(unknown.safety[0]?.reason).toBe(
+      "Harness: Made-up harness standard (as recorded) is a standard this rule set does not accept — held: fix and re-present.",
+    );
+    const nameless = judge(
+      [
+        item(6, "harness", {
+          standardId: "made-up-std",
+          label: { form: "manufacture-year", year: 2024 },
+        }),
+      ],
+      "2026-05-16",
+    );
+    expect(nameless.safety[0]?.reason).toBe(
+      "Harness: recorded with a standard this rule set does not accept — held: fix and re-present.",
+    );
+    expect(nameless.reason).not.toContain("made-up-std");
   });
 });
