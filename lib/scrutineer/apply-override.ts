@@ -8,7 +8,8 @@ export type Overridden = SettledVerdict & { override: Verdict["override"]; inval
 
 /**
  * Applies the latest effective override: it sets the final status and class, and the reason
- * names who decided and why; the computed result stays alongside. An override naming an unknown
+ * says it is the chief scrutineer's decision and why (who decided stays in `override.officialId`,
+ * never in the words); the computed result stays alongside. An override naming an unknown
  * class, or "moved-up" to a class not above the declared one, is ignored (and flagged).
  */
 export function applyOverride(args: {
@@ -39,7 +40,7 @@ export function applyOverride(args: {
     status: p.status,
     classId: p.classId,
     fallbackClassId: null,
-    reason: `Chief scrutineer's decision (${override.officialId}): ${decision} — ${reason}.`,
+    reason: `Chief scrutineer's decision: ${decision} — ${reason}.`,
     override: {
       recordId: override.id,
       officialId: override.officialId,

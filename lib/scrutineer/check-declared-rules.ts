@@ -63,7 +63,10 @@ export function checkDeclaredRules(cls: ClassRules, ctx: ClassCheckContext): Rul
           onFail: onFail("tyre-treadwear"),
           outcome: "waiting",
           decisionRule: "declared",
-          reason: `Tyres carry no treadwear grade; ${cls.name} needs at least ${cls.minTreadwear}`,
+          reason:
+            cls.minTreadwear > 0
+              ? `Tyres carry no treadwear grade; ${cls.name} needs a treadwear grade of at least ${cls.minTreadwear}`
+              : `Tyres carry no treadwear grade; ${cls.name} needs tyres with a treadwear grade`,
         }),
         outcome: "fail",
         limit: { value: cls.minTreadwear, side: "min" },

@@ -28,5 +28,5 @@ export function describeMargin(args: {
   if (outcome !== "inconclusive" || args.expandedUncertainty === undefined) return plain;
   const u = formatQuantity(args.expandedUncertainty, unit, display);
   const where = marginToLimit === 0 ? "exactly on the limit" : plain;
-  return `${where}, less than the ± ${u} uncertainty`;
+  return `${where}; the ± ${u} uncertainty leaves it undecided`;
 }

@@ -32,7 +32,8 @@ const SPLITTER_DIMENSIONS: ReadonlyArray<LengthDimension> = [
  * Evaluates one entry at the tech line: applies voids and overrides to ALL the entry's records,
  * combines repeated readings, checks the declared class and moves the car up the ladder as the
  * rule set says, checks safety items on the event date, and explains every result in the event's
- * units. Pure and deterministic: the same rule set, entry, set of records and date give the same
+ * units. A car with no effective reading, checklist answer, photo or note waits ("not yet seen at
+ * the tech line"), whatever its declarations say. Pure and deterministic: the same rule set, entry, set of records and date give the same
  * verdict, whatever the order of the records — on the phone (preview) and on the server (the
  * verdict that counts).
  * @param input validated by `evaluateEntryInputSchema` (the declared class must be in the rule set)
@@ -76,7 +77,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     ]),
   ];
   const summaries = [...dimensions.values()];
-  const computed = settleVerdict({
+  const settled = settleVerdict({
     walk,
     classes: ruleSet.classes,
     eventRules,
@@ -86,6 +87,16 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     display,
     expiryWarningDays: ruleSet.safety.expiryWarningDays,
   });
+  // Declarations alone never clear (or hold) a car: until the tech line has recorded something, it waits.
+  const computed =
+    resolved.inspectionRecords > 0
+      ? settled
+      : {
+          status: "waiting" as const,
+          classId: entry.declaredClassId,
+          fallbackClassId: null,
+          reason: "Waiting — not yet seen at the tech line.",
+        };
   const final = applyOverride({
     computed,
     override: resolved.override,

@@ -33,19 +33,34 @@ function limitText(r: RuleResult, v: Verdict): string {
   return r.limit === null ? "none" : formatQuantity(r.limit.value, r.unit, v.display);
 }
 
-function ruleMap(v: Verdict): Map<string, { className: string; rule: RuleResult }> {
+/** The rules of the classes in `classIds` and the event's rules, keyed "classId/ruleId". */
+function ruleMap(
+  v: Verdict,
+  classIds: ReadonlySet<string>,
+): Map<string, { className: string; rule: RuleResult }> {
   const map = new Map<string, { className: string; rule: RuleResult }>();
-  for (const c of v.classChecks)
+  for (const c of v.classChecks) {
+    if (!classIds.has(c.classId)) continue;
     for (const rule of c.rules)
       map.set(`${c.classId}/${rule.ruleId}`, { className: c.className, rule });
+  }
   for (const rule of v.eventRules) map.set(`event/${rule.ruleId}`, { className: "Event", rule });
   return map;
 }
 
+/**
+ * Rule by rule, what differs between the two verdicts. Only classes checked under both versions
+ * are compared: a class the car reaches under one version only (it moved up, or no longer does)
+ * says nothing about the rule set, so its rules are neither "new" nor "no longer checked".
+ */
 function explainChange(before: Verdict, after: Verdict): string[] {
   const why: string[] = [];
-  const a = ruleMap(before);
-  const b = ruleMap(after);
+  const checkedAfter = new Set(after.classChecks.map((c) => c.classId));
+  const both = new Set(
+    before.classChecks.map((c) => c.classId).filter((id) => checkedAfter.has(id)),
+  );
+  const a = ruleMap(before, both);
+  const b = ruleMap(after, both);
   for (const key of [...new Set([...a.keys(), ...b.keys()])].sort()) {
     const x = a.get(key);
     const y = b.get(key);

@@ -11,6 +11,8 @@ export type ResolvedRecords = {
   /** The latest effective override, if any. */
   override: TechRecordOf<"override"> | null;
   counts: { total: number; used: number; voided: number; ignored: number };
+  /** Effective readings, checklist answers, photos and notes: what shows the car was inspected. */
+  inspectionRecords: number;
   flags: Set<VerdictFlag>;
 };
 
@@ -103,11 +105,13 @@ export function resolveRecords(
   const checklist = new Map<string, TechRecordOf<"checklist">>();
   let override: TechRecordOf<"override"> | null = null;
   let voided = 0;
+  let inspectionRecords = 0;
   for (const r of unique) {
     if (isVoided(r.id)) {
       voided += 1;
       continue;
     }
+    if (r.kind !== "void" && r.kind !== "override") inspectionRecords += 1;
     if (r.kind === "reading") readings.push(r);
     else if (r.kind === "checklist") {
       const current = checklist.get(r.payload.itemId);
@@ -121,6 +125,7 @@ export function resolveRecords(
     checklist,
     override,
     counts: { total: records.length, used: unique.length - voided, voided, ignored },
+    inspectionRecords,
     flags,
   };
 }

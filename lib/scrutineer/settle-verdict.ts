@@ -4,6 +4,7 @@ import type { DisplayUnits } from "./display-units";
 import { formatDecimal } from "./format-decimal";
 import { DISPLAY_DECIMALS, formatLength } from "./format-length";
 import { formatMass } from "./format-mass";
+import { midSentence } from "./mid-sentence";
 import { RULE_TITLES } from "./rule-titles";
 import type {
   DimensionSummary,
@@ -21,14 +22,6 @@ export type SettledVerdict = {
   reason: string;
 };
 
-/** Lower-cases the first letter for use mid-sentence, unless it starts an acronym. */
-function midSentence(text: string): string {
-  const [a, b] = [text[0], text[1]];
-  if (a === undefined || (b !== undefined && b === b.toUpperCase() && b !== b.toLowerCase()))
-    return text;
-  return a.toLowerCase() + text.slice(1);
-}
-
 function andMore(count: number): string {
   return count > 0 ? ` (and ${count} more)` : "";
 }
@@ -44,25 +37,29 @@ function formatDimensionValue(
   return formatLength(value, display.length, DISPLAY_DECIMALS[display.length] + extraDecimals);
 }
 
-/** Two quantities worded at the first resolution that tells them apart (at most 3 decimals more). */
-function formatPair(
+/**
+ * Two officials' values and the allowed difference, worded at the first resolution (at most 3
+ * decimals more than the display's) where the values differ and their difference visibly
+ * exceeds the allowance.
+ */
+function formatDisagreement(
   d: DimensionSummary,
-  a: number,
-  b: number,
+  pair: DimensionSummary["disagreements"][number],
   display: DisplayUnits,
-): [string, string] {
-  let pair: [string, string] = ["", ""];
+): [string, string, string] {
+  let words: [string, string, string] = ["", "", ""];
   for (let extra = 0; extra <= 3; extra += 1) {
-    pair = [formatDimensionValue(d, a, display, extra), formatDimensionValue(d, b, display, extra)];
-    if (pair[0] !== pair[1]) break;
+    const at = (value: number) => formatDimensionValue(d, value, display, extra);
+    words = [at(pair.first.mean), at(pair.second.mean), at(pair.allowedDifference)];
+    if (words[0] !== words[1] && at(pair.difference) !== words[2]) break;
   }
-  return pair;
+  return words;
 }
 
 /**
  * Decides the verdict from everything checked, most serious first — held (a safety failure,
  * the noise limit, a stop-kind failure, or over every class), then re-measure (a doubt under
- * guarded acceptance, or readings that disagree), then waiting, then cleared or moved up — and
+ * guarded acceptance, or two officials' readings that disagree), then waiting, then cleared or moved up — and
  * words the one-line reason.
  */
 export function settleVerdict(args: {
@@ -124,12 +121,7 @@ export function settleVerdict(args: {
   if (firstDisagreeing !== undefined && firstPair !== undefined) {
     const count = disagreeing.reduce((n, d) => n + d.disagreements.length, 0);
     const label = dimensionLabel(firstDisagreeing.dimension, firstDisagreeing.corner);
-    const [difference, allowed] = formatPair(
-      firstDisagreeing,
-      firstPair.difference,
-      firstPair.allowedDifference,
-      display,
-    );
+    const [first, second, allowed] = formatDisagreement(firstDisagreeing, firstPair, display);
     const asRead =
       walk.end.kind === "fits" && walk.end.classIndex > walk.declaredIndex
         ? `; as read, the car moves up to ${nameAt(walk.end.classIndex)}`
@@ -138,7 +130,7 @@ export function settleVerdict(args: {
       status: "re-measure",
       classId: idAt(walk.end.classIndex),
       fallbackClassId: walk.fallbackClassIndex === null ? null : idAt(walk.fallbackClassIndex),
-      reason: `Re-measure — two readings of the ${label} differ by ${difference}, more than the ${allowed} their uncertainties allow${andMore(count - 1)}${asRead}; re-measure or ask the chief scrutineer.`,
+      reason: `Re-measure — two scrutineers' readings of the ${label} differ: ${first} and ${second}, more than the ${allowed} their uncertainties allow${andMore(count - 1)}${asRead}; re-measure to find which is right, then the chief scrutineer voids the wrong one.`,
     };
   }
   const firstDoubt = doubts[0];

@@ -36,7 +36,7 @@ function conditionsMismatch(
 /**
  * Groups an entry's effective readings by dimension (and corner), drops readings taken outside
  * the rule set's measurement conditions, combines the rest (mean, Type A, Type B, U = k·u) and
- * flags pairs that disagree.
+ * flags officials whose values disagree.
  * @returns the summaries, and the readings set aside for their conditions
  */
 export function summariseDimensions(
@@ -78,6 +78,7 @@ export function summariseDimensions(
       value: r.payload.value,
       standardUncertainty: r.payload.instrument.standardUncertainty,
       instrumentId: r.payload.instrument.id,
+      officialId: r.officialId,
     }));
     const combined = combineReadings(values, k);
     if (combined === null) continue;

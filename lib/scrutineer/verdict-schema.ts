@@ -117,6 +117,15 @@ export const safetyItemResultSchema = z.object({
 /** See {@link safetyItemResultSchema}. */
 export type SafetyItemResult = z.infer<typeof safetyItemResultSchema>;
 
+/** One official's readings of a dimension, combined (mean, u_c from Type A and Type B). */
+export const officialValueSchema = z.object({
+  officialId: z.string(),
+  recordIds: z.array(z.string()),
+  n: z.number().int(),
+  mean: z.number(),
+  combinedStandardUncertainty: z.number(),
+});
+
 /** The combined readings of one dimension (one corner for corner weights). */
 export const dimensionSummarySchema = z.object({
   dimension,
@@ -130,10 +139,12 @@ export const dimensionSummarySchema = z.object({
   expandedUncertainty: z.number(),
   k: z.number(),
   readingIds: z.array(z.string()),
+  /** Pairs of officials whose values (each official's readings combined) differ by more than
+   * k·√(u₁² + u₂²). */
   disagreements: z.array(
     z.object({
-      firstRecordId: z.string(),
-      secondRecordId: z.string(),
+      first: officialValueSchema,
+      second: officialValueSchema,
       difference: z.number(),
       allowedDifference: z.number(),
     }),

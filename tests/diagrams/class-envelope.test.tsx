@@ -78,7 +78,7 @@ describe("class envelope", () => {
     );
     expect(h.text).toContain("unsure");
     expect(h.text).toContain("over by 1 mm");
-    expect(h.text).toContain("less than the ± 2.8 mm uncertainty");
+    expect(h.text).toContain("the ± 2.8 mm uncertainty leaves it undecided");
     expect(h.part).toMatch(/class="[^"]*\bfill-attention\b/);
   });
 

@@ -3,7 +3,16 @@ import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
 import type { TechRecord } from "@/lib/scrutineer/record-schema";
 import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
 import { VERDICT_NOTICE } from "@/lib/scrutineer/verdict-notice";
-import { clubRuleSet, input, lengthReading, reading, uuid7 } from "./fixtures";
+import {
+  byOfficial,
+  clubRuleSet,
+  input,
+  lengthReading,
+  note,
+  reading,
+  uuid7,
+  voidRecord,
+} from "./fixtures";
 
 const IN = 25.4; // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly
 
@@ -20,7 +29,7 @@ const run = (records: TechRecord[], ruleSet: RuleSetInput = clubRuleSet()) =>
 
 describe("evaluateEntry: statuses", () => {
   it("waits when nothing is measured, naming what is needed", () => {
-    const v = run([]);
+    const v = run([note(1, "car in the queue")]);
     expect(v.status).toBe("waiting");
     expect(v.missing).toEqual([
       "wing top height from the ground",
@@ -30,6 +39,48 @@ describe("evaluateEntry: statuses", () => {
       "body width",
     ]);
     expect(v.reason).toMatch(/^Waiting — still to do: wing top height from the ground, /);
+  });
+
+  it("a car never seen at the tech line waits, whatever its declarations say", () => {
+    // Source: Motorsport UK NCR 2026 Ch.5 Part A App.6 Arts 2.14–2.16 — a scrutineer examines the car before approval
+    const noLimits = clubRuleSet();
+    noLimits.classes = noLimits.classes.slice(1); // "Open": nothing to measure
+    const v = evaluateEntry(
+      input({ ruleSet: noLimits, records: [], declaredClassId: "open", declarations: {} }),
+    );
+    expect(v.status).toBe("waiting");
+    expect(v.classId).toBe("open");
+    expect(v.reason).toBe("Waiting — not yet seen at the tech line.");
+    // A voided record does not count as being seen; one effective record does.
+    const voided = evaluateEntry(
+      input({
+        ruleSet: noLimits,
+        records: [note(1), voidRecord(2, 1, "wrong car's note")],
+        declaredClassId: "open",
+        declarations: {},
+      }),
+    );
+    expect(voided.reason).toBe("Waiting — not yet seen at the tech line.");
+    const seen = evaluateEntry(
+      input({ ruleSet: noLimits, records: [note(1)], declaredClassId: "open", declarations: {} }),
+    );
+    expect(seen.status).toBe("cleared");
+  });
+
+  it("one scrutineer's repeated readings are combined, not flagged as a disagreement", () => {
+    // Source: ARCHITECTURE.md — disagreement is two scrutineers' readings beyond their combined
+    // uncertainty; JCGM 100:2008 §4.2 — repeated observations give a Type A uncertainty.
+    // 1400, 1402, 1401 mm on a u = 0.5 mm gauge: mean 1401 mm.
+    const repeats = [1400, 1402, 1401].map((mm, i) =>
+      lengthReading(20 + i, "wingTopFromGroundMm", mm, 0.5),
+    );
+    const v = run([...repeats, ...inside.slice(1)]);
+    expect(v.flags).not.toContain("disagreement");
+    expect(v.status).toBe("cleared");
+    expect(v.dimensions.find((d) => d.dimension === "wingTopFromGroundMm")?.mean).toBeCloseTo(
+      1401,
+      12,
+    );
   });
 
   it("clears a car inside every limit and says which check was closest", () => {
@@ -43,28 +94,30 @@ describe("evaluateEntry: statuses", () => {
     expect(v.notice).toMatch(/chief scrutineer has the final say/);
   });
 
-  it("asks for a re-measure when two readings of one dimension disagree", () => {
+  it("asks for a re-measure when two scrutineers' readings of one dimension disagree", () => {
     // Worked here: tape u 1 mm each, k 2 → allowed 2.83 mm; 4 mm apart disagrees (JCGM 100:2008 §5.1.2, §6.2.1)
-    const v = run([...inside, lengthReading(6, "wingOverhangMm", 4 * IN + 4)]);
+    const second = byOfficial(lengthReading(6, "wingOverhangMm", 4 * IN + 4), "scrutineer-b");
+    const v = run([...inside, second]);
     expect(v.status).toBe("re-measure");
     expect(v.flags).toContain("disagreement");
     expect(v.reason).toBe(
-      "Re-measure — two readings of the wing overhang differ by 4 mm, more than the 2.8 mm their uncertainties allow; re-measure or ask the chief scrutineer.",
+      "Re-measure — two scrutineers' readings of the wing overhang differ: 101.6 mm and 105.6 mm, more than the 2.8 mm their uncertainties allow; re-measure to find which is right, then the chief scrutineer voids the wrong one.",
     );
     const d = v.dimensions.find((x) => x.dimension === "wingOverhangMm");
     expect(d?.n).toBe(2);
     expect(d?.disagreements[0]).toMatchObject({
-      firstRecordId: uuid7(3),
-      secondRecordId: uuid7(6),
+      first: { officialId: "scrutineer-a", recordIds: [uuid7(3)], n: 1 },
+      second: { officialId: "scrutineer-b", recordIds: [uuid7(6)], n: 1 },
       difference: 4,
     });
   });
 
   it("words a disagreement finely enough to show the difference, and says where the car stands as read", () => {
-    // Worked here: u 0.5 mm each, k 2 → allowed 2·√0.5 = 1.414 mm = 0.0557 in; 1.5 mm = 0.0591 in apart
+    // Worked here: u 0.5 mm each, k 2 → allowed 2·√0.5 = 1.414 mm = 0.0557 in; 1.5 mm = 0.0591 in apart;
+    // 1528.6 mm = 60.181 in and 1530.1 mm = 60.240 in (NIST SP 811 App. B.8 — 1 in = 25.4 mm)
     const over = [
       lengthReading(1, "wingTopFromGroundMm", 1300 + 9 * IN, 0.5),
-      lengthReading(6, "wingTopFromGroundMm", 1300 + 9 * IN + 1.5, 0.5),
+      byOfficial(lengthReading(6, "wingTopFromGroundMm", 1300 + 9 * IN + 1.5, 0.5), "scrutineer-b"),
     ];
     const v = evaluateEntry(
       input({
@@ -77,7 +130,7 @@ describe("evaluateEntry: statuses", () => {
     expect(v.status).toBe("re-measure");
     expect(v.classId).toBe("open");
     expect(v.reason).toBe(
-      "Re-measure — two readings of the wing top height from the ground differ by 0.059 in, more than the 0.056 in their uncertainties allow; as read, the car moves up to Open; re-measure or ask the chief scrutineer.",
+      "Re-measure — two scrutineers' readings of the wing top height from the ground differ: 60.181 in and 60.24 in, more than the 0.056 in their uncertainties allow; as read, the car moves up to Open; re-measure to find which is right, then the chief scrutineer voids the wrong one.",
     );
   });
 
@@ -138,7 +191,7 @@ describe("evaluateEntry: statuses", () => {
     );
     expect(v.status).toBe("moved-up");
     expect(v.reason).toBe(
-      "Moves up from Club to Open — tyres carry no treadwear grade; Club needs at least 200.",
+      "Moves up from Club to Open — tyres carry no treadwear grade; Club needs a treadwear grade of at least 200.",
     );
     const graded = evaluateEntry(
       input({
@@ -149,6 +202,25 @@ describe("evaluateEntry: statuses", () => {
       }),
     );
     expect(graded.status).toBe("cleared");
+  });
+
+  it("words an ungraded tyre on a zero treadwear floor sensibly", () => {
+    // Source: common practice (no source) — a race tyre without UTQG fails any floor, a floor of 0 included
+    const rs = clubRuleSet();
+    const first = rs.classes[0];
+    if (first === undefined) throw new Error("fixture has a first class");
+    first.minTreadwear = 0;
+    const v = evaluateEntry(
+      input({
+        ruleSet: rs,
+        records: inside,
+        declaredClassId: "club",
+        declarations: { aero: { wing: true }, tyres: { kind: "no-grade" } },
+      }),
+    );
+    expect(v.reason).toBe(
+      "Moves up from Club to Open — tyres carry no treadwear grade; Club needs tyres with a treadwear grade.",
+    );
   });
 
   it("holds a car over the event's noise limit", () => {

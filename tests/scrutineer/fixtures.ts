@@ -41,6 +41,16 @@ export function lengthReading(
   });
 }
 
+/** The same record as taken by another official (a second scrutineer at the car). */
+export function byOfficial(record: TechRecord, officialId: string): TechRecord {
+  return { ...record, officialId };
+}
+
+/** A note record: the car was at the tech line, nothing measured. */
+export function note(n: number, text = "at the tech line"): TechRecord {
+  return { ...base(n), kind: "note", payload: { text } };
+}
+
 /** A checklist record. */
 export function checklist(
   n: number,

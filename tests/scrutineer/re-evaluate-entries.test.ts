@@ -57,6 +57,45 @@ describe("reEvaluateEntries", () => {
     ]);
   });
 
+  it("lists a rule as new only where the rule set gained it, not for a class the car newly reaches", () => {
+    // Open gets a height limit in both versions, so its rules are checked once the car moves up.
+    // Source: Motorsport UK NCR 2026 Ch.14 App.4 — 200 mm above the roof (as v2's Club limit above)
+    const withOpenLimit = (rs: RuleSetInput): RuleSetInput => {
+      const open = rs.classes[1];
+      if (open?.aero.wing.allowed) open.aero.wing.height = { reference: "roof-peak", maxMm: 300 };
+      return rs;
+    };
+    const before = ruleSetSchema.parse(withOpenLimit(clubRuleSet()));
+    const after = ruleSetSchema.parse(withOpenLimit(structuredClone(v2Input)));
+    const moved = reEvaluateEntries({ before, after, entries: [entry("b", 202)] });
+    expect(moved.changed[0]?.after).toMatchObject({ status: "moved-up", classId: "open" });
+    // Open was checked under v2 only: its rules are not "new rules".
+    expect(moved.changed[0]?.why).toEqual([
+      "Club wing height: limit 203.2 mm → 200 mm; pass → fail",
+    ]);
+
+    // A treadwear floor added to Club, checked under both versions, is a new rule.
+    // Source: common practice (no source) — UTQG treadwear floors in club classes
+    const floored = withOpenLimit(clubRuleSet());
+    floored.version = 5;
+    const club = floored.classes[0];
+    if (club !== undefined) club.minTreadwear = 200;
+    const treadwearEntry = { ...entry("t", 150) };
+    treadwearEntry.entry = {
+      ...treadwearEntry.entry,
+      declarations: {
+        ...treadwearEntry.entry.declarations,
+        tyres: { kind: "graded", treadwear: 180 },
+      },
+    };
+    const gained = reEvaluateEntries({
+      before,
+      after: ruleSetSchema.parse(floored),
+      entries: [treadwearEntry],
+    });
+    expect(gained.changed[0]?.why).toEqual(["Club tyre treadwear: new rule, fail"]);
+  });
+
   it("reports entries that cannot be evaluated under the new version", () => {
     const v3Input = clubRuleSet();
     v3Input.version = 3;

@@ -5,6 +5,7 @@ import type { TechRecord } from "@/lib/scrutineer/record-schema";
 import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
 import { verdictSchema } from "@/lib/scrutineer/verdict-schema";
 import {
+  byOfficial,
   clubRuleSet,
   input,
   lengthReading,
@@ -29,7 +30,7 @@ const run = (records: TechRecord[], ruleSet: RuleSetInput = clubRuleSet()) =>
 
 describe("evaluateEntry: records", () => {
   it("a void removes its target; voiding the void restores it", () => {
-    const wrong = lengthReading(6, "wingOverhangMm", 300);
+    const wrong = byOfficial(lengthReading(6, "wingOverhangMm", 300), "scrutineer-b");
     expect(run([...inside, wrong]).status).toBe("re-measure");
     const voided = run([...inside, wrong, voidRecord(7, 6, "read the wrong car")]);
     expect(voided.status).toBe("cleared");
@@ -98,8 +99,9 @@ describe("evaluateEntry: records", () => {
       computedClassId: "open",
     });
     expect(v.reason).toBe(
-      "Chief scrutineer's decision (chief-1): cleared in Club — Plumb bob hung off the diffuser; re-read by me at 4.9 in.",
+      "Chief scrutineer's decision: cleared in Club — Plumb bob hung off the diffuser; re-read by me at 4.9 in.",
     );
+    expect(v.reason).not.toContain("chief-1"); // who decided is kept in override.officialId, not in the words
     const undone = run([
       ...over,
       override(9, { status: "cleared", classId: "club", reason: "Plumb bob slipped" }),
@@ -107,6 +109,27 @@ describe("evaluateEntry: records", () => {
     ]);
     expect(undone.status).toBe("moved-up");
     expect(undone.override).toBeNull();
+  });
+
+  it("a disagreement stays until the wrong reading is voided, as its reason says", () => {
+    // Worked here: tape u 1 mm each, k 2 → allowed 2.83 mm (JCGM 100:2008 §5.1.2, §6.2.1); 10 mm apart.
+    const other = byOfficial(lengthReading(6, "wingSpanMm", 64 * IN + 10), "scrutineer-b");
+    const flagged = run([...inside, other]);
+    expect(flagged.status).toBe("re-measure");
+    expect(flagged.reason).toMatch(
+      /re-measure to find which is right, then the chief scrutineer voids the wrong one\.$/,
+    );
+    // More readings agreeing with the first scrutineer do not clear it: the second one's value stands.
+    const more = run([
+      ...inside,
+      other,
+      lengthReading(7, "wingSpanMm", 64 * IN),
+      lengthReading(8, "wingSpanMm", 64 * IN),
+    ]);
+    expect(more.flags).toContain("disagreement");
+    const resolved = run([...inside, other, voidRecord(9, 6, "read the wrong plumb mark")]);
+    expect(resolved.flags).not.toContain("disagreement");
+    expect(resolved.status).toBe("cleared");
   });
 
   it("ignores an override naming no real class, and flags it", () => {
@@ -119,7 +142,9 @@ describe("evaluateEntry: records", () => {
   });
 
   it("returns plain JSON that its own schema accepts, unchanged by a round trip", () => {
-    const v = run([...inside, lengthReading(6, "wingOverhangMm", 4 * IN + 4)]);
+    const second = byOfficial(lengthReading(6, "wingOverhangMm", 4 * IN + 4), "scrutineer-b");
+    const v = run([...inside, second]);
+    expect(v.flags).toContain("disagreement");
     const json = JSON.parse(JSON.stringify(v));
     expect(json).toEqual(v);
     expect(verdictSchema.parse(json)).toEqual(v);

@@ -4,6 +4,7 @@ import { describe, expect, it } from "vitest";
 import { combineReadings } from "@/lib/scrutineer/combine-readings";
 import { conformanceProbability } from "@/lib/scrutineer/conformance-probability";
 import { decideLimit } from "@/lib/scrutineer/decide-limit";
+import { describeMargin } from "@/lib/scrutineer/describe-margin";
 import { findDisagreements } from "@/lib/scrutineer/find-disagreements";
 import { normalCdf } from "@/lib/scrutineer/normal-cdf";
 import { spread } from "./fixtures";
@@ -81,28 +82,97 @@ describe("combineReadings (GUM, JCGM 100:2008)", () => {
 });
 
 describe("findDisagreements", () => {
-  it("flags two readings further apart than k·√(u₁² + u₂²)", () => {
+  const r = (
+    recordId: string,
+    officialId: string,
+    value: number,
+    u = 1,
+    instrumentId = "tape",
+  ) => ({
+    recordId,
+    officialId,
+    value,
+    standardUncertainty: u,
+    instrumentId,
+  });
+
+  it("flags two officials' readings further apart than k·√(u₁² + u₂²)", () => {
     // Worked here: u 1 mm each, k 2 → allowed 2√2 = 2.83 mm. 3 mm apart disagrees; 2.8 mm does not.
     // Source: JCGM 100:2008 §5.1.2 (u of a difference) with U = k·u (§6.2.1)
+    const found = findDisagreements([r("b", "sam", 203), r("a", "dev", 200)], 2);
+    expect(found).toHaveLength(1);
+    expect(found[0]?.first).toMatchObject({ officialId: "dev", mean: 200, recordIds: ["a"] });
+    expect(found[0]?.second).toMatchObject({ officialId: "sam", mean: 203, recordIds: ["b"] });
+    expect(found[0]?.allowedDifference).toBeCloseTo(2 * Math.SQRT2, 12);
+    expect(findDisagreements([r("a", "dev", 200), r("b", "sam", 202.8)], 2)).toEqual([]);
+  });
+
+  it("one official's repeated readings are a Type A sample, not a disagreement", () => {
+    // Source: ARCHITECTURE.md — disagreement is between two scrutineers' readings of one car;
+    // JCGM 100:2008 §4.2 — repeated observations are evaluated as Type A (s/√n), not compared pairwise.
+    // 1400, 1402, 1401 mm on a u = 0.5 mm gauge: 1400 and 1402 are 2 mm apart, more than
+    // 2·√(0.5² + 0.5²) = 1.41 mm, yet they are one official's sample.
+    const same = [
+      r("a", "dev", 1400, 0.5, "g"),
+      r("b", "dev", 1402, 0.5, "g"),
+      r("c", "dev", 1401, 0.5, "g"),
+    ];
+    expect(findDisagreements(same, 2)).toEqual([]);
+  });
+
+  it("compares officials by their combined values, each with its own Type A and Type B", () => {
+    // Source: JCGM 100:2008 §4.2.3 (u_A = s/√n), §5.1.2 (u_c), §6.2.1 (U = k·u).
+    // Worked here: Dev 1400, 1402, 1401 mm (u_B 0.5): mean 1401, s 1, u_A 1/√3 = 0.57735,
+    // u_c √(1/3 + 0.25) = 0.76376. Sam 1404 mm once (u_B 0.5, u_A 0): u_c 0.5.
+    // Allowed 2·√(0.76376² + 0.5²) = 2·√(0.58333 + 0.25) = 1.82574 mm; 3 mm apart → disagree.
     const found = findDisagreements(
       [
-        { recordId: "b", value: 203, standardUncertainty: 1 },
-        { recordId: "a", value: 200, standardUncertainty: 1 },
+        r("a", "dev", 1400, 0.5, "g"),
+        r("b", "dev", 1402, 0.5, "g"),
+        r("c", "dev", 1401, 0.5, "g"),
+        r("d", "sam", 1404, 0.5, "g2"),
       ],
       2,
     );
     expect(found).toHaveLength(1);
-    expect(found[0]?.firstRecordId).toBe("a");
-    expect(found[0]?.allowedDifference).toBeCloseTo(2 * Math.SQRT2, 12);
+    expect(found[0]?.first).toMatchObject({ officialId: "dev", n: 3, recordIds: ["a", "b", "c"] });
+    expect(found[0]?.first.mean).toBeCloseTo(1401, 12);
+    expect(found[0]?.first.combinedStandardUncertainty).toBeCloseTo(Math.sqrt(1 / 3 + 0.25), 12);
+    expect(found[0]?.difference).toBeCloseTo(3, 12);
+    expect(found[0]?.allowedDifference).toBeCloseTo(2 * Math.sqrt(1 / 3 + 0.25 + 0.25), 12);
+    // Sam at 1402.5 mm: 1.5 mm apart, inside the 1.83 mm allowed.
     expect(
       findDisagreements(
         [
-          { recordId: "a", value: 200, standardUncertainty: 1 },
-          { recordId: "b", value: 202.8, standardUncertainty: 1 },
+          r("a", "dev", 1400, 0.5, "g"),
+          r("b", "dev", 1402, 0.5, "g"),
+          r("c", "dev", 1401, 0.5, "g"),
+          r("d", "sam", 1402.5, 0.5, "g2"),
         ],
         2,
       ),
     ).toEqual([]);
+  });
+});
+
+describe("describeMargin", () => {
+  it("words a guarded-acceptance doubt as one line a scrutineer can read aloud", () => {
+    // Source: JCGM 106:2012 §8 — inside the guard band the result is undecided (DOMAIN.md)
+    const doubt = (marginToLimit: number, unit: "mm" | "lb/hp", expandedUncertainty: number) =>
+      describeMargin({
+        outcome: "inconclusive",
+        marginToLimit,
+        side: unit === "mm" ? "max" : "min",
+        unit,
+        display: { length: "mm", mass: "kg" },
+        expandedUncertainty,
+      });
+    expect(doubt(0, "mm", 2.83)).toBe(
+      "exactly on the limit; the ± 2.8 mm uncertainty leaves it undecided",
+    );
+    expect(doubt(0.004, "lb/hp", 0.019)).toBe(
+      "less than 0.01 lb/hp inside; the ± 0.02 lb/hp uncertainty leaves it undecided",
+    );
   });
 });
 
