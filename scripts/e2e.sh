@@ -11,7 +11,10 @@ trap 'node_modules/.bin/tsx scripts/e2e-database.ts drop "$E2E_DB" || true' EXIT
 export PLUMBLINE_E2E_APP_PORT="${PLUMBLINE_E2E_APP_PORT:-3300}"
 export DATABASE_URL="$E2E_DB"
 export APP_URL="http://127.0.0.1:$PLUMBLINE_E2E_APP_PORT"
-export SMTP_PORT=2725 MAILBOX_URL=http://127.0.0.1:2780 S3_ENDPOINT=http://127.0.0.1:4768
+# Ports apart from the demo and the integration tests; override to run two checkouts side by side.
+export SMTP_PORT="${PLUMBLINE_E2E_SMTP_PORT:-2725}"
+export MAILBOX_URL="http://127.0.0.1:${PLUMBLINE_E2E_MAILBOX_PORT:-2780}"
+export S3_ENDPOINT="http://127.0.0.1:${PLUMBLINE_E2E_S3_PORT:-4768}"
 export PLUMBLINE_SERVICES_DIR="$ROOT/.data/test-services/e2e"
 rm -rf "$PLUMBLINE_SERVICES_DIR"
 node_modules/.bin/playwright test "$@"

@@ -6,6 +6,7 @@ import { AppError } from "../errors";
 import { ruleSetSchema } from "../scrutineer/rule-set-schema";
 import { notifyVerdictChanges } from "../tech/notify-verdict-changes";
 import { recomputeVerdicts } from "../tech/recompute-verdicts";
+import { verdictMoved } from "../tech/verdict-moved";
 
 /**
  * Judge the event's cars by another saved version of its rule set: pin it (locking it for good),
@@ -39,9 +40,7 @@ export async function pinRuleSet({
   const pinned = await pinRuleSetVersion({ eventId, versionId, pinnedBy: userId, now });
   if (pinned.previousVersion === null) return { ...pinned, changed: 0, mailed: 0 };
   const changes = await recomputeVerdicts({ eventId, now });
-  const changed = changes.filter(
-    (c) => c.before?.status !== c.verdict.status || c.before?.finalClass !== c.verdict.classId,
-  ).length;
+  const changed = changes.filter(verdictMoved).length;
   const mailed = await notifyVerdictChanges({ eventId, changes, ruleSet });
   return { ...pinned, changed, mailed };
 }

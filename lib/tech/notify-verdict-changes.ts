@@ -5,6 +5,7 @@ import { composeVerdictMail } from "../mail/compose-verdict-mail";
 import { sendMail } from "../mail/send-mail";
 import type { RuleSet } from "../scrutineer/rule-set-schema";
 import type { VerdictChange } from "./recompute-verdicts";
+import { verdictMoved } from "./verdict-moved";
 
 /**
  * E-mail the driver (and co-driver) of each entry whose verdict changed to something other than
@@ -19,11 +20,7 @@ export async function notifyVerdictChanges({
   changes: VerdictChange[];
   ruleSet: RuleSet;
 }): Promise<number> {
-  const changed = changes.filter(
-    (c) =>
-      c.verdict.status !== "waiting" &&
-      (c.before?.status !== c.verdict.status || c.before?.finalClass !== c.verdict.classId),
-  );
+  const changed = changes.filter((c) => c.verdict.status !== "waiting" && verdictMoved(c));
   if (changed.length === 0) return 0;
   const contacts = new Map(
     (await listEntryContacts({ eventId, entryIds: changed.map((c) => c.entryId) })).map((c) => [

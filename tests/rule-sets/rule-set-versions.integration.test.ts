@@ -68,7 +68,7 @@ describe("the organizer's class-rules page", () => {
     expect(page.status).toBe(200);
     const html = await page.text();
     expect(html).toContain("The class ladder, low to high");
-    expect(html).toContain(`Draft version ${v1.version + 1}`);
+    expect(html).toMatch(new RegExp(`Draft version (<!-- -->)?${v1.version + 1}<`));
     expect(
       (await (await signedIn(demo.scrutineer)).fetch(`/organizer/${eventId}/rules`)).status,
     ).toBe(403);
