@@ -108,14 +108,16 @@ export async function pinRuleSetAction(
   try {
     const { user } = await requirePermission({ eventId, permission: "rule-sets.manage" });
     const result = await pinRuleSet({ eventId, versionId, userId: user.id });
+    if (result.previousVersion === null) {
+      return {
+        status: "done",
+        message: `Version ${result.version} was already the pinned version.`,
+      };
+    }
     revalidatePath(`/organizer/${eventId}`, "layout");
-    return {
-      status: "done",
-      message:
-        result.previousVersion === null
-          ? `Version ${result.version} was already the pinned version.`
-          : `Version ${result.version} is pinned. ${result.changed} ${result.changed === 1 ? "verdict" : "verdicts"} changed; ${result.mailed} ${result.mailed === 1 ? "e-mail" : "e-mails"} sent. Phones use it once their event pack is refreshed.`,
-    };
+    redirect(
+      `/organizer/${eventId}/rules?pinned=${result.version}&changed=${result.changed}&mailed=${result.mailed}`,
+    );
   } catch (error) {
     if (error instanceof AppError) return { status: "error", message: error.message };
     throw error;

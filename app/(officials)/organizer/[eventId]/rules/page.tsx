@@ -18,15 +18,29 @@ import { draftRuleSetAction, pinRuleSetAction } from "./actions";
 
 export const metadata: Metadata = { title: "Class rules" };
 
+/** The counts a pin redirect carries, shown only while that version is still the pinned one. */
+function pinnedOutcome(
+  query: { pinned?: string; changed?: string; mailed?: string },
+  pinnedVersion: number,
+): { changed: number; mailed: number } | null {
+  const count = (v: string | undefined) =>
+    v !== undefined && /^\d{1,6}$/.test(v) ? Number(v) : null;
+  const changed = count(query.changed);
+  const mailed = count(query.mailed);
+  if (count(query.pinned) !== pinnedVersion || changed === null || mailed === null) return null;
+  return { changed, mailed };
+}
+
 export default async function RuleSetPage({
   params,
   searchParams,
 }: {
   params: Promise<{ eventId: string }>;
-  searchParams: Promise<{ version?: string }>;
+  searchParams: Promise<{ version?: string; pinned?: string; changed?: string; mailed?: string }>;
 }) {
   const { eventId } = await params;
-  const { version: versionParam } = await searchParams;
+  const query = await searchParams;
+  const versionParam = query.version;
   const { event } = await loadEventPage({
     eventId,
     permission: "rule-sets.manage",
@@ -43,6 +57,7 @@ export default async function RuleSetPage({
   const latestRuleSet = ruleSetSchema.parse(latest?.body ?? pinned?.body);
   const nextVersion = (versions[0]?.version ?? pinnedRuleSet.version) + 1;
 
+  const justPinned = pinnedOutcome(query, pinnedRuleSet.version);
   const reviewId = idSchema.safeParse(versionParam).success ? versionParam : undefined;
   const reviewRow = versions.find((v) => v.id === reviewId && !v.pinned);
   const review = reviewRow ? await getRuleSetVersion({ eventId, versionId: reviewRow.id }) : null;
@@ -70,6 +85,18 @@ export default async function RuleSetPage({
           </a>
         </div>
       </EventHeading>
+
+      {justPinned ? (
+        <p
+          className="rounded-lg border-2 border-cleared-line bg-cleared-soft p-3 text-lg font-semibold text-cleared"
+          role="status"
+        >
+          Version {pinnedRuleSet.version} is pinned. {justPinned.changed}{" "}
+          {justPinned.changed === 1 ? "verdict" : "verdicts"} changed; {justPinned.mailed}{" "}
+          {justPinned.mailed === 1 ? "e-mail" : "e-mails"} sent. Phones use it once their event pack
+          is refreshed.
+        </p>
+      ) : null}
 
       {reviewRow && reviewRuleSet && reviewPreview ? (
         <section className="space-y-4" data-testid="rule-set-review">
