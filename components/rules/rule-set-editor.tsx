@@ -48,9 +48,10 @@ export function RuleSetEditor({
     <form action={formAction} className="card space-y-4" noValidate data-testid="rule-set-editor">
       <h2 className="text-2xl font-bold">Draft version {nextVersion}</h2>
       <p className="text-base text-asphalt-800">
-        Start from the pinned version below, or upload a JSON file. Keep the rule set&apos;s{" "}
-        <code>id</code>, set <code>version</code> to {nextVersion}, and keep every class an entry
-        has declared. Saving stores the draft; the event is judged by it only once you pin it.
+        The box holds the latest saved version to edit; or upload a JSON file. Keep the rule
+        set&apos;s <code>id</code>, set <code>version</code> to {nextVersion}, and keep every class
+        an entry has declared. Saving stores the draft; the event is judged by it only once you pin
+        it.
       </p>
       <input type="hidden" name="eventId" value={eventId} />
       <div>
