@@ -98,7 +98,7 @@ export function RuleSetEditor({
                 {issue.path === "" ? (
                   ""
                 ) : (
-                  <code className="ml-1 text-asphalt-800">({issue.path})</code>
+                  <code className="ml-1 break-all text-asphalt-800">({issue.path})</code>
                 )}
                 : {issue.message}
               </li>

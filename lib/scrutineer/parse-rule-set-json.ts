@@ -1,3 +1,4 @@
+import type { z } from "zod";
 import { type RuleSet, ruleSetSchema } from "./rule-set-schema";
 
 /** One problem found in a rule set as written: where (a readable path) and what to do. */
@@ -62,6 +63,36 @@ export function describeRuleSetPath(path: ReadonlyArray<PropertyKey>, body: unkn
   return parts.join(" › ");
 }
 
+const KIND_WORDS: Record<string, string> = {
+  number: "a number",
+  string: "text",
+  boolean: "true or false",
+  object: "an object ({ … })",
+  array: "a list ([ … ])",
+  null: "null",
+};
+
+function kindOf(value: unknown): string {
+  if (value === null) return "null";
+  if (Array.isArray(value)) return "array";
+  return typeof value;
+}
+
+/** A schema issue in words an organizer can act on; zod's own wording otherwise. */
+function issueMessage(issue: z.core.$ZodIssue, body: unknown): string {
+  if (issue.code !== "invalid_type") return issue.message;
+  let value: unknown = body;
+  for (const key of issue.path) {
+    value =
+      value !== null && typeof value === "object"
+        ? (value as Record<PropertyKey, unknown>)[key]
+        : undefined;
+  }
+  const expected = KIND_WORDS[issue.expected] ?? issue.expected;
+  if (value === undefined) return `Missing: give ${expected}.`;
+  return `Expected ${expected}, found ${KIND_WORDS[kindOf(value)] ?? kindOf(value)}.`;
+}
+
 /**
  * Reads a rule set as an organizer writes it (JSON text) and validates it with the rule-set
  * schema. Every problem comes back with its place, so a form can show it beside the field.
@@ -107,7 +138,7 @@ export function parseRuleSetJson(text: string): ParseRuleSetJsonResult {
     issues: parsed.error.issues.map((issue) => ({
       path: issue.path.map(String).join("."),
       where: describeRuleSetPath(issue.path, body),
-      message: issue.message,
+      message: issueMessage(issue, body),
     })),
   };
 }

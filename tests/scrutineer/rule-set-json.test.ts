@@ -92,6 +92,9 @@ describe("parseRuleSetJson: a rule set as the organizer writes it", () => {
       "Class 2 (Series) › aero › wing › height › maxMm | classes.1.aero.wing.height.maxMm",
     );
     expect(where).toContain("decisionRule › k | decisionRule.k");
+    const messages = Object.fromEntries(result.issues.map((i) => [i.path, i.message]));
+    expect(messages["classes.1.aero.wing.height.maxMm"]).toBe("Expected a number, found text.");
+    expect(messages["decisionRule.k"]).toBe("Missing: give a number.");
   });
 
   it("reports the schema's own cross-checks (a class id used twice) at the class", () => {
