@@ -2,6 +2,7 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import { type DrainSummary, drainOutbox } from "@/lib/offline/drain-outbox";
 import { requeueSignedOutRecords } from "@/lib/offline/requeue-signed-out-records";
+import { resetOutboxBackoff } from "@/lib/offline/reset-outbox-backoff";
 
 const TICK_MS = 15_000;
 
@@ -14,18 +15,33 @@ export function useOutboxRunner(eventId: string, pending: number) {
   const [running, setRunning] = useState(false);
   const [last, setLast] = useState<DrainSummary | null>(null);
   const busy = useRef(false);
+  const again = useRef(false);
 
   const drain = useCallback(async () => {
-    if (busy.current) return;
+    if (busy.current) {
+      // Asked while a drain runs (e.g. "Send now" during the timer's drain): go once more after.
+      again.current = true;
+      return;
+    }
     busy.current = true;
     setRunning(true);
     try {
-      setLast(await drainOutbox({ now: () => Date.now() }));
+      for (let round = 0; round < 2; round += 1) {
+        again.current = false;
+        setLast(await drainOutbox({ now: () => Date.now() }));
+        if (!again.current) break;
+      }
     } finally {
       busy.current = false;
       setRunning(false);
     }
   }, []);
+
+  /** "Send now": the scrutineer says there is signal, so no record waits out its retry time. */
+  const sendNow = useCallback(async () => {
+    await resetOutboxBackoff({ now: Date.now(), eventId });
+    await drain();
+  }, [drain, eventId]);
 
   useEffect(() => {
     setOnline(navigator.onLine);
@@ -52,5 +68,5 @@ export function useOutboxRunner(eventId: string, pending: number) {
     return () => window.clearInterval(timer);
   }, [pending, drain]);
 
-  return { online, running, last, drain };
+  return { online, running, last, drain, sendNow };
 }

@@ -4,6 +4,7 @@ import type { PackVerdict } from "./event-pack-schema";
 import { listLocalRecords } from "./list-local-records";
 import { isPending, type LocalRecord } from "./local-record";
 import { OUTBOX_LOCK, SYNC_BATCH_SIZE } from "./outbox-constants";
+import { resetOutboxBackoff } from "./reset-outbox-backoff";
 import { saveServerVerdicts } from "./save-event-pack";
 import { updateLocalRecord } from "./update-local-record";
 import { uploadPhoto } from "./upload-photo";
@@ -34,8 +35,9 @@ type Options = {
 /**
  * Send the outbox: photos first, then records in batches, oldest first, one context at a time
  * (Web Locks). Stored and duplicate records are marked sent; refused ones keep their reason; with
- * no signal or a server error the batch waits with exponential backoff and jitter; an expired
- * sign-in keeps the queue until the scrutineer signs in again. Nothing is dropped.
+ * no signal or a server error the batch waits with exponential backoff and jitter, until a request
+ * goes through (then every queued record is due again); an expired sign-in keeps the queue until
+ * the scrutineer signs in again. Nothing is dropped.
  */
 export async function drainOutbox(options: Options): Promise<DrainSummary> {
   const locks =
@@ -49,14 +51,34 @@ export async function drainOutbox(options: Options): Promise<DrainSummary> {
   return result ?? { ran: false, sent: 0, refused: 0, waiting: 0, signedOut: false };
 }
 
-async function run({
-  now,
-  random = Math.random,
-  fetchImpl = fetch,
-  onProgress,
-}: Options): Promise<DrainSummary> {
-  const due = (await listLocalRecords()).filter((r) => isPending(r) && r.nextAttemptAt <= now());
+/** Passes over the outbox in one drain: a pass after a success sends what was waiting out a retry. */
+const MAX_PASSES = 3;
+
+async function run(options: Options): Promise<DrainSummary> {
   const summary: DrainSummary = { ran: true, sent: 0, refused: 0, waiting: 0, signedOut: false };
+  for (let pass = 0; pass < MAX_PASSES; pass += 1) {
+    const { madeDue } = await runPass(options, summary);
+    if (madeDue === 0) break;
+  }
+  return summary;
+}
+
+/**
+ * One pass over the records due now. The first request that goes through resets every queued
+ * record's backoff (there is signal again); `madeDue` says how many that made due, for the next pass.
+ */
+async function runPass(
+  { now, random = Math.random, fetchImpl = fetch, onProgress }: Options,
+  summary: DrainSummary,
+): Promise<{ madeDue: number }> {
+  const due = (await listLocalRecords()).filter((r) => isPending(r) && r.nextAttemptAt <= now());
+  let madeDue = 0;
+  let reached = false;
+  const signalIsBack = async () => {
+    if (reached) return;
+    reached = true;
+    madeDue = await resetOutboxBackoff({ now: now() });
+  };
   const total = due.length;
   const byEvent = new Map<string, LocalRecord[]>();
   for (const item of due) byEvent.set(item.eventId, [...(byEvent.get(item.eventId) ?? []), item]);
@@ -100,6 +122,7 @@ async function run({
       const outcome = await uploadPhoto(item, fetchImpl);
       if (outcome === "uploaded") {
         await updateLocalRecord(item.record.id, (r) => ({ ...r, blob: "uploaded" }));
+        await signalIsBack();
         ready.push({ ...item, blob: "uploaded" });
       } else if (outcome === "signed-out") {
         await holdForSignIn([item]);
@@ -149,6 +172,7 @@ async function run({
         for (const item of batch) await refuse(item, reason);
         continue;
       }
+      await signalIsBack();
       const byId = new Map(body.results.filter((r) => r.id).map((r) => [r.id as string, r]));
       for (const item of batch) {
         const result = byId.get(item.record.id);
@@ -171,5 +195,5 @@ async function run({
     }
     announceChange({ type: "records", eventId });
   }
-  return summary;
+  return { madeDue };
 }

@@ -1,11 +1,14 @@
 import "fake-indexeddb/auto";
-import { describe, expect, it } from "vitest";
+import { clear } from "idb-keyval";
+import { beforeEach, describe, expect, it } from "vitest";
 import { addLocalRecord } from "@/lib/offline/add-local-record";
 import { backoffDelayMs } from "@/lib/offline/backoff-delay";
 import { drainOutbox } from "@/lib/offline/drain-outbox";
+import { idbStores } from "@/lib/offline/idb-stores";
 import { listLocalRecords } from "@/lib/offline/list-local-records";
 import { makeRecord } from "@/lib/offline/make-record";
 import { requeueSignedOutRecords } from "@/lib/offline/requeue-signed-out-records";
+import { resetOutboxBackoff } from "@/lib/offline/reset-outbox-backoff";
 
 // The outbox against a stand-in server (a fetch function with the sync endpoint's contract);
 // fake-indexeddb (npm) plays the phone's IndexedDB. The real endpoint is covered by the
@@ -97,6 +100,93 @@ describe("the outbox", () => {
         })) as typeof fetch,
     });
     expect((await listLocalRecords(eventId))[0]?.state).toBe("sent");
+  });
+});
+
+describe("the retry wait", () => {
+  // Each case starts with an empty outbox: a drain sends every event's due records.
+  beforeEach(async () => {
+    await clear(idbStores().records);
+  });
+  const stored = (ids: string[]) =>
+    (async () =>
+      answer(200, {
+        results: ids.map((id) => ({ id, status: "stored" })),
+        verdicts: [],
+      })) as unknown as typeof fetch;
+  const noSignal = (async () => {
+    throw new TypeError("Failed to fetch");
+  }) as typeof fetch;
+
+  it("Send now forgets the wait and sends at once", async () => {
+    const eventId = "event-d";
+    const item = reading(eventId, 30);
+    await addLocalRecord(item);
+    await drainOutbox({ now: () => 1000, random: () => 0.5, fetchImpl: noSignal });
+    const [waiting] = await listLocalRecords(eventId);
+    expect(waiting?.nextAttemptAt).toBeGreaterThan(1000);
+    expect(waiting?.lastError).toBe("No signal; will try again.");
+
+    // What "Send now" does: reset, then drain — still at the same moment, well inside the wait.
+    expect(await resetOutboxBackoff({ now: 1001, eventId })).toBe(1);
+    const [reset] = await listLocalRecords(eventId);
+    expect(reset).toMatchObject({
+      state: "queued",
+      attempts: 0,
+      nextAttemptAt: 0,
+      lastError: null,
+    });
+    let calls = 0;
+    const summary = await drainOutbox({
+      now: () => 1001,
+      fetchImpl: (async (...args: Parameters<typeof fetch>) => {
+        calls += 1;
+        return stored([item.record.id])(...args);
+      }) as typeof fetch,
+    });
+    expect(calls).toBe(1);
+    expect(summary.sent).toBe(1);
+    expect((await listLocalRecords(eventId))[0]?.state).toBe("sent");
+  });
+
+  it("a request that goes through sends the records that were waiting out a retry, in the same drain", async () => {
+    const eventId = "event-e";
+    const old = reading(eventId, 40);
+    await addLocalRecord(old);
+    await drainOutbox({ now: () => 2000, random: () => 0.5, fetchImpl: noSignal });
+    const fresh = reading(eventId, 41);
+    await addLocalRecord(fresh);
+    // Still inside the old record's wait: only the fresh one is due, but its success shows
+    // there is signal, so the old one goes too.
+    const bodies: string[][] = [];
+    const summary = await drainOutbox({
+      now: () => 2001,
+      fetchImpl: (async (_url: unknown, init?: RequestInit) => {
+        const ids = (JSON.parse(String(init?.body)) as { records: { id: string }[] }).records.map(
+          (r) => r.id,
+        );
+        bodies.push(ids);
+        return answer(200, {
+          results: ids.map((id) => ({ id, status: "stored" })),
+          verdicts: [],
+        });
+      }) as typeof fetch,
+    });
+    expect(bodies).toEqual([[fresh.record.id], [old.record.id]]);
+    expect(summary.sent).toBe(2);
+    expect((await listLocalRecords(eventId)).map((r) => r.state)).toEqual(["sent", "sent"]);
+  });
+
+  it("leaves refused and signed-out records alone", async () => {
+    const eventId = "event-f";
+    const held = reading(eventId, 50);
+    await addLocalRecord(held);
+    await drainOutbox({
+      now: () => 5,
+      fetchImpl: (async () => answer(401, { error: { code: "unauthenticated" } })) as typeof fetch,
+    });
+    expect(await resetOutboxBackoff({ now: 6, eventId })).toBe(0);
+    expect((await listLocalRecords(eventId))[0]?.state).toBe("needs-sign-in");
   });
 });
 
