@@ -228,12 +228,14 @@ const demoRuleSetInput = {
         id: "head-restraint",
         label: "Head restraint",
         required: false,
+        notApplicableAllowed: true,
         equipment: { acceptedStandardIds: ["sfi-38-1"] },
       },
       {
         id: "suit",
         label: "Race suit",
         required: false,
+        notApplicableAllowed: true,
         equipment: { acceptedStandardIds: ["fia-8856-2018"] },
       },
       {

@@ -175,7 +175,8 @@ export function demoTechRecords(ctx: Ctx, ruleSet: RuleSet): TechRecord[] {
   for (const item of ruleSet.safety.checklist) {
     const equipment = labels[item.id];
     const expired = ctx.twist === "expired-harness" && item.id === "harness";
-    const fitted = !item.notApplicableAllowed || rnd.next() > 0.5;
+    // Equipment the demo reads a label off is fitted; other optional kit is fitted at random.
+    const fitted = equipment !== undefined || !item.notApplicableAllowed || rnd.next() > 0.5;
     records.push({
       ...base(first),
       kind: "checklist",

@@ -3,6 +3,14 @@ import { CORNER_LABELS, DIMENSION_LABELS } from "./dimension-labels";
 import { equipmentLabelSchema } from "./equipment-label-schema";
 import { READING_LIMITS } from "./reading-limits";
 
+/** Longest free text each record takes, in characters; forms on the phone enforce the same. */
+export const RECORD_TEXT_LIMITS = {
+  checklistComment: 2000,
+  standardName: 200,
+  photoCaption: 500,
+  note: 4000,
+} as const;
+
 /** Length dimensions a scrutineer reads, all in millimetres. */
 export const LENGTH_DIMENSIONS = [
   "wingTopFromGroundMm",
@@ -117,11 +125,11 @@ export const checklistPayloadSchema = z.object({
       standardId: z.string().min(1),
       /** The standard's name as the scrutineer saw it, so a reason can name it even if a later
        * rule-set version no longer lists the id. */
-      standardName: z.string().max(200).optional(),
+      standardName: z.string().max(RECORD_TEXT_LIMITS.standardName).optional(),
       label: equipmentLabelSchema,
     })
     .optional(),
-  comment: z.string().max(2000).optional(),
+  comment: z.string().max(RECORD_TEXT_LIMITS.checklistComment).optional(),
 });
 /** See {@link checklistPayloadSchema}. */
 export type ChecklistPayload = z.infer<typeof checklistPayloadSchema>;
@@ -168,12 +176,15 @@ export const recordSchema = z.discriminatedUnion("kind", [
   z.object({
     ...base,
     kind: z.literal("photo"),
-    payload: z.object({ storageKey: z.string().min(1), caption: z.string().max(500).optional() }),
+    payload: z.object({
+      storageKey: z.string().min(1),
+      caption: z.string().max(RECORD_TEXT_LIMITS.photoCaption).optional(),
+    }),
   }),
   z.object({
     ...base,
     kind: z.literal("note"),
-    payload: z.object({ text: z.string().min(1).max(4000) }),
+    payload: z.object({ text: z.string().min(1).max(RECORD_TEXT_LIMITS.note) }),
   }),
   z.object({
     ...base,

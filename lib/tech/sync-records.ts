@@ -2,22 +2,24 @@ import "server-only";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { insertRecords } from "../../db/queries/insert-records";
 import { listEventEntryIds } from "../../db/queries/list-event-entry-ids";
+import { listRecordAuthors } from "../../db/queries/list-record-authors";
 import type { SessionUser } from "../auth/get-session-user";
-import { can } from "../auth/permissions";
 import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
 import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
+import { describeRecordIssue } from "./describe-record-issue";
 import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 import { notifyVerdictChanges } from "./notify-verdict-changes";
 import { recomputeVerdicts } from "./recompute-verdicts";
-import { recordPermission } from "./record-permission";
+import { recordRefusal } from "./record-refusal";
 import type { SyncRecordResult, SyncResponse } from "./sync-schema";
 
 /**
  * Accept a batch from a phone's outbox: check every record on its own (shape, who made it, the
- * permission for its kind, that its entry is in this event), store the good ones idempotently in
- * one transaction, re-derive the verdicts of the entries touched, tell entrants what changed, and
- * answer per record. A bad record never stops the good ones; nothing is silently dropped.
+ * permission for its kind and, for a void, whose record it voids; that its entry is in this
+ * event), store the good ones idempotently in one transaction, re-derive the verdicts of the
+ * entries touched, tell entrants what changed, and answer per record. A bad record never stops
+ * the good ones; nothing is silently dropped. Refusals are worded for the scrutineer.
  */
 export async function syncRecords({
   eventId,
@@ -36,37 +38,43 @@ export async function syncRecords({
   if (!context) throw new AppError("not_found", "No such event.");
 
   const results: SyncRecordResult[] = new Array(rawRecords.length);
+  const parsed = rawRecords.map((raw) => recordSchema.safeParse(raw));
+  // A scrutineer may void their own records: look up who made each record a void names.
+  const authors = await listRecordAuthors({
+    eventId,
+    recordIds: [
+      ...new Set(
+        parsed.flatMap((p) =>
+          p.success && p.data.kind === "void" ? [p.data.payload.targetRecordId] : [],
+        ),
+      ),
+    ],
+  });
   const candidates: { index: number; record: TechRecord }[] = [];
-  rawRecords.forEach((raw, index) => {
-    const parsed = recordSchema.safeParse(raw);
+  parsed.forEach((result, index) => {
+    const raw = rawRecords[index];
     const id =
       typeof (raw as { id?: unknown })?.id === "string" ? (raw as { id: string }).id : null;
-    if (!parsed.success) {
-      const issue = parsed.error.issues[0];
-      const where = issue?.path.length ? `${issue.path.join(".")}: ` : "";
+    if (!result.success) {
       results[index] = {
         id,
         status: "refused",
-        reason: `${where}${issue?.message ?? "not a valid record"}`,
+        reason: describeRecordIssue(result.error.issues[0], raw),
       };
       return;
     }
-    const record = parsed.data;
-    if (record.officialId !== user.id) {
-      results[index] = {
-        id,
-        status: "refused",
-        reason: "Made under another official's sign-in; sign in as them to send it.",
-      };
-    } else if (!can(roles, recordPermission[record.kind])) {
-      results[index] = {
-        id,
-        status: "refused",
-        reason: `Your role in this event cannot record a ${record.kind}.`,
-      };
-    } else {
-      candidates.push({ index, record });
-    }
+    const record = result.data;
+    // A void's target: stored already, or accepted earlier in this batch (the outbox sends
+    // oldest first, so a reading and the void of it can travel together).
+    const target =
+      record.kind === "void"
+        ? (authors.get(record.payload.targetRecordId) ??
+          candidates.find((c) => c.record.id === record.payload.targetRecordId)?.record ??
+          null)
+        : null;
+    const refusal = recordRefusal({ record, userId: user.id, roles, target });
+    if (refusal !== null) results[index] = { id, status: "refused", reason: refusal };
+    else candidates.push({ index, record });
   });
 
   const known = await listEventEntryIds({
