@@ -72,11 +72,12 @@ describe("class envelope", () => {
     expect(h.wingTopY).toBeGreaterThan(h.limitY);
   });
 
-  it("says unsure, in the attention colour, for an inconclusive reading", () => {
+  it("says too close to call, in the attention colour, for an inconclusive reading", () => {
     const h = heightPart(
       envelope({ height: { measuredMm: 201, outcome: "inconclusive", uncertaintyMm: 2.8 } }),
     );
-    expect(h.text).toContain("unsure");
+    expect(h.text).toContain("too close to call");
+    expect(h.text).not.toContain("unsure");
     expect(h.text).toContain("over by 1 mm");
     expect(h.text).toContain("the ± 2.8 mm uncertainty leaves it undecided");
     expect(h.part).toMatch(/class="[^"]*\bfill-attention\b/);
@@ -148,6 +149,52 @@ describe("class envelope", () => {
     const markup = envelope({ height: { limitMm: null, outcome: "waiting" } });
     expect(textOf(partByTestId(markup, "envelope-height"))).toContain("no limit");
     expect(partByTestId(markup, "envelope-height")).not.toContain("data-limit-y");
+  });
+
+  it("says once, not twice, that a class sets no limit", () => {
+    const markup = envelope({
+      height: { limitMm: null, measuredMm: 180, outcome: "waiting" },
+      overhang: { limitMm: null, measuredMm: 150, outcome: "waiting" },
+      span: { limitMm: null, measuredMm: 100, outcome: "waiting", bodyWidthMm: null },
+    });
+    const readout = textOf(partByTestId(markup, "envelope-readout"));
+    expect(readout).toContain("no limit in this class");
+    expect(readout).not.toContain("no limit in this class · no limit in this class");
+    for (const label of attributeValues(markup, "aria-label")) {
+      expect(label).not.toMatch(/no limit in this class; no limit, no limit in this class/);
+    }
+  });
+
+  it("keeps every line of the rear view inside the drawing when the body is not measured", () => {
+    // Semibold Barlow is about 0.56 em per character (the drawings' own estimate, margin-label.tsx).
+    const markup = envelope({
+      span: {
+        limitMm: null,
+        measuredMm: null,
+        outcome: "waiting",
+        wingSpanMm: 1600,
+        bodyWidthMm: null,
+      },
+    });
+    const part = partByTestId(markup, "envelope-span");
+    const [viewBox = ""] = attributeValues(part, "viewBox");
+    const width = Number(viewBox.split(" ")[2]);
+    const texts = [
+      ...part.matchAll(/<text x="([\d.]+)"[^>]*font-size="(\d+)"[^>]*>([^<]*)<\/text>/g),
+    ];
+    expect(texts.map((t) => t[3])).toContain("body width not measured yet");
+    for (const [, x, size, text = ""] of texts) {
+      expect(Number(x) + text.length * Number(size) * 0.56, text).toBeLessThanOrEqual(width);
+    }
+  });
+
+  it("names the rearmost bodywork below the cut, clear of the car", () => {
+    const markup = partByTestId(envelope({}), "envelope-side");
+    const cut = /<line x1="0" y1="(\d+)" x2="360" y2="\1" stroke-width="3"/.exec(markup);
+    const label = /<text x="[\d.]+" y="([\d.]+)"[^>]*>rearmost bodywork<\/text>/.exec(markup);
+    expect(cut).not.toBeNull();
+    expect(label).not.toBeNull();
+    expect(Number(label?.[1])).toBeGreaterThan(Number(cut?.[1]));
   });
 
   it("gives each view an accessible label with the numbers and the words", () => {

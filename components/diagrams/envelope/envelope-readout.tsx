@@ -16,7 +16,7 @@ export function EnvelopeReadout({ rows }: { rows: EnvelopeRow[] }) {
           <dd className="tabular text-2xl font-semibold text-asphalt-950">{row.reading}</dd>
           <dd className="tabular text-base text-asphalt-800">
             {row.limit}
-            {row.margin === row.look.word ? null : (
+            {row.margin === row.look.word || row.margin === row.limit ? null : (
               <>
                 {" · "}
                 <strong className="font-semibold text-asphalt-950">{row.margin}</strong>

@@ -48,7 +48,12 @@ export function EnvelopeRearView({
   const bodyWords =
     span.bodyWidthMm === null ? "body width not measured yet" : `body ${f(span.bodyWidthMm)}`;
   const margin = envelopeMarginText(span, unit);
-  const notes = [`${spanWords} · ${bodyWords}`, allowance];
+  // Span and body on one line when it fits the drawing's width, else one line each.
+  const together = `${spanWords} · ${bodyWords}`;
+  const notes = [
+    ...(together.length <= SLOT_CHARS ? [together] : [spanWords, bodyWords]),
+    allowance,
+  ];
   // The words take the top band; the wing's end plates start under it, whatever its length.
   const lines = (margin === look.word ? 0 : wrapWords(margin, SLOT_CHARS).length) + notes.length;
   const VIEW: DiagramView = {

@@ -84,6 +84,6 @@ export function envelopeRows(props: ClassEnvelopeProps): EnvelopeRow[] {
 /** A row read aloud in one sentence, for a drawing's accessible label. */
 export function envelopeRowSentence(row: EnvelopeRow): string {
   return `${row.title}: ${row.reading}; ${row.limit}; ${row.look.word}${
-    row.margin === row.look.word ? "" : `, ${row.margin}`
+    row.margin === row.look.word || row.margin === row.limit ? "" : `, ${row.margin}`
   }.`;
 }

@@ -22,6 +22,8 @@ const SCALE = 2;
 const CROP_CAR_Y = 110;
 const HEIGHT_CHARS = 36;
 const OVERHANG_CHARS = 32;
+/** Room under the cut for the name of the rearmost-bodywork line. */
+const LINE_LABEL_BAND = 24;
 
 /**
  * The class envelope from the side: the height limit as a level dashed line, the overhang limit
@@ -62,7 +64,7 @@ export function EnvelopeSideView({
   const highest = Math.min(layout.wingTopY, layout.heightLimitY ?? Infinity, SIDE.roofPeak.y);
   const VIEW: DiagramView = { x: 110, y: highest - (BAND_Y + 14) / SCALE, scale: SCALE };
   const CROP_Y = Math.round((CROP_CAR_Y - VIEW.y) * SCALE);
-  const H = CROP_Y + 52 + overhangLines * 21;
+  const H = CROP_Y + LINE_LABEL_BAND + 52 + overhangLines * 21;
   const p = (x: number, y: number) => projectPoint(VIEW, x, y);
   const [roofX, roofY] = p(SIDE.roofPeak.x, SIDE.roofPeak.y);
   const [bumperX, bumperTop] = p(SIDE.bumperRear.x, SIDE.hatch.to.y);
@@ -123,7 +125,8 @@ export function EnvelopeSideView({
         strokeDasharray="3 5"
         className="stroke-asphalt-600"
       />
-      <DiagramLabel x={bumperX - 6} y={CROP_Y - 8} anchor="end" size={16}>
+      {/* Named under the cut, clear of the car, where its dashed line ends. */}
+      <DiagramLabel x={bumperX} y={CROP_Y + LINE_LABEL_BAND - 6} anchor="middle" size={16}>
         rearmost bodywork
       </DiagramLabel>
 
@@ -193,7 +196,7 @@ export function EnvelopeSideView({
         ) : null}
         <MarginLabel
           x={6}
-          y={CROP_Y + 10}
+          y={CROP_Y + LINE_LABEL_BAND + 8}
           title="Overhang"
           look={oLook}
           text={overhangText}

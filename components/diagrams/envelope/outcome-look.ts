@@ -3,7 +3,7 @@ import type { EnvelopeCheck } from "./envelope-types";
 
 /** The word and tone a limit is shown with; the tone never appears without the word. */
 export type OutcomeLook = {
-  word: "inside" | "over" | "unsure" | "not measured yet" | "no limit";
+  word: "inside" | "over" | "too close to call" | "not measured yet" | "no limit";
   tone: DiagramTone;
   state: "inside" | "over" | "unsure" | "waiting" | "unlimited";
 };
@@ -20,6 +20,6 @@ export function outcomeLook(check: EnvelopeCheck): OutcomeLook {
     case "fail":
       return { word: "over", tone: "stopped", state: "over" };
     case "inconclusive":
-      return { word: "unsure", tone: "attention", state: "unsure" };
+      return { word: "too close to call", tone: "attention", state: "unsure" };
   }
 }
