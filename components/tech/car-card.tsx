@@ -69,7 +69,8 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
         </div>
       </header>
       <Caution title="Before you measure">
-        Engine off, car on the level pad, and nobody under a car that is not secured on stands.
+        Engine off, car on the level pad, and nobody under a car that is not secured on stands. The
+        noise test is the one reading taken with the engine running; it has its own caution.
       </Caution>
       <section className="card space-y-4" aria-label="Verdict">
         {server ? (
@@ -94,14 +95,14 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
           <VerdictView
             verdict={preview}
             ruleSet={ruleSet}
-            label="Preview on this phone"
+            label="Preview on this device"
             testId="preview-verdict"
           />
         ) : null}
       </section>
       {preview ? <EnvelopePanel verdict={preview} /> : null}
       <ReadingsPanel entryId={entryId} records={records} verdict={preview} />
-      <ChecklistPanel entryId={entryId} verdict={preview} />
+      <ChecklistPanel entryId={entryId} records={records} verdict={preview} />
       <PhotosNotesPanel entryId={entryId} records={records} />
       {canChief ? <ChiefPanel entryId={entryId} records={records} verdict={preview} /> : null}
     </article>

@@ -1,33 +1,68 @@
 "use client";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
 import type { EquipmentLabel } from "@/lib/scrutineer/equipment-label-schema";
-import type { ChecklistPayload } from "@/lib/scrutineer/record-schema";
+import {
+  type ChecklistPayload,
+  RECORD_TEXT_LIMITS,
+  type TechRecordOf,
+} from "@/lib/scrutineer/record-schema";
 import type { ChecklistItem } from "@/lib/scrutineer/safety-rules-schema";
 import type { SafetyItemResult } from "@/lib/scrutineer/verdict-schema";
+import { AnswerButton } from "./answer-button";
+import { CharacterCount } from "./character-count";
+import { checklistItemState } from "./checklist-item-state";
+import { type LabelFields, labelFieldsFromAnswer } from "./label-fields-from-answer";
+import { recordByline } from "./record-byline";
+import { StateMark } from "./state-mark";
 import { useTech } from "./tech-context";
+import { VoidOwnRecord } from "./void-own-record";
 
-/** One line of the safety checklist: pass / fail / not applicable, with the equipment label. */
+const border = {
+  cleared: "border-cleared-line",
+  attention: "border-attention-line",
+  stopped: "border-stopped-line",
+  waiting: "border-asphalt-300",
+  neutral: "border-asphalt-300",
+} as const;
+
+/**
+ * One line of the safety checklist: how it stands (word, icon, colour), pass / fail / not fitted
+ * (offered only where the rule set accepts "not applicable"), the equipment label filled in from
+ * the latest answer, and the answer chosen shown pressed.
+ */
 export function ChecklistItemForm({
   entryId,
   item,
   result,
+  answer,
 }: {
   entryId: string;
   item: ChecklistItem;
   result: SafetyItemResult | undefined;
+  /** The answer the verdict rests on (the latest one not void), if any. */
+  answer: TechRecordOf<"checklist"> | undefined;
 }) {
-  const { ruleSet, official, deviceId, record, canWrite } = useTech();
-  const standards = ruleSet.safety.standards.filter((s) =>
-    item.equipment?.acceptedStandardIds.includes(s.id),
+  const { ruleSet, pack, official, deviceId, record, canWrite } = useTech();
+  const accepted = item.equipment?.acceptedStandardIds ?? [];
+  const standards = ruleSet.safety.standards.filter((s) => accepted.includes(s.id));
+  const [fields, setFields] = useState<LabelFields>(() =>
+    labelFieldsFromAnswer(answer?.payload, accepted),
   );
-  const [standardId, setStandardId] = useState(standards[0]?.id ?? "");
-  const [year, setYear] = useState("");
-  const [month, setMonth] = useState("");
-  const [date, setDate] = useState("");
+  const answerId = answer?.id ?? null;
+  // A newer answer (saved here, or arriving from the server) refills the label fields.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: refill only when the answer changes
+  useEffect(() => {
+    setFields(labelFieldsFromAnswer(answer?.payload, accepted));
+  }, [answerId]);
   const [comment, setComment] = useState("");
   const [error, setError] = useState<string | null>(null);
+  const { standardId, year, month, date } = fields;
+  const set = (patch: Partial<LabelFields>) => setFields((f) => ({ ...f, ...patch }));
   const standard = standards.find((s) => s.id === standardId);
+  const state = checklistItemState(result);
+  const chosen = answer?.payload.result ?? null;
+  const commentMax = RECORD_TEXT_LIMITS.checklistComment;
 
   const label = (): EquipmentLabel | string => {
     if (!standard) return "Pick the standard on the label";
@@ -52,7 +87,10 @@ export function ChecklistItemForm({
     }
   };
 
-  const answer = async (outcome: ChecklistPayload["result"]) => {
+  const save = async (outcome: ChecklistPayload["result"]) => {
+    if (comment.trim().length > commentMax) {
+      return setError(`Shorten the comment to ${commentMax} characters.`);
+    }
     let payload: ChecklistPayload = {
       itemId: item.id,
       result: outcome,
@@ -77,28 +115,47 @@ export function ChecklistItemForm({
         now: new Date(),
       }),
     );
+    setComment("");
   };
 
-  const tone =
-    result?.outcome === "pass"
-      ? "border-cleared-line"
-      : result?.outcome === "fail"
-        ? "border-stopped-line"
-        : "border-asphalt-300";
+  const counterId = `comment-count-${item.id}`;
   return (
     <li
-      className={`space-y-2 rounded-lg border-2 bg-white p-3 ${tone}`}
+      className={`space-y-2 rounded-lg border-2 bg-white p-3 ${border[state.tone]}`}
       data-testid={`checklist-${item.id}`}
       data-outcome={result?.outcome ?? "waiting"}
+      data-state={state.tone}
     >
       <div>
         <p className="text-lg font-semibold">
           {item.label}
-          {item.required ? "" : " (if fitted)"}
+          {item.notApplicableAllowed ? " (if fitted)" : item.required ? "" : " (optional)"}
         </p>
         {item.guidance ? <p className="text-base text-asphalt-800">{item.guidance}</p> : null}
-        {result && (result.outcome !== "waiting" || result.recordId !== null) ? (
-          <p className="text-base font-semibold">{result.reason}</p>
+        <p
+          className="mt-1 flex flex-wrap items-center gap-x-2 text-base"
+          data-testid="checklist-state"
+        >
+          <StateMark tone={state.tone} word={state.word} />
+          {answer ? (
+            <span className="text-asphalt-800">
+              {recordByline({
+                officialId: answer.officialId,
+                deviceTime: answer.deviceTime,
+                me: official.id,
+                officials: pack.officials,
+                timeZone: pack.event.timeZone,
+              })}
+            </span>
+          ) : null}
+        </p>
+        {result && result.recordId !== null ? (
+          <p className="text-base" data-testid="checklist-reason">
+            {result.reason}
+          </p>
+        ) : null}
+        {answer?.payload.comment ? (
+          <p className="text-base text-asphalt-800">Comment: {answer.payload.comment}</p>
         ) : null}
       </div>
       {item.equipment ? (
@@ -108,7 +165,7 @@ export function ChecklistItemForm({
             <select
               className="field-input"
               value={standardId}
-              onChange={(e) => setStandardId(e.target.value)}
+              onChange={(e) => set({ standardId: e.target.value })}
             >
               {standards.map((s) => (
                 <option key={s.id} value={s.id}>
@@ -124,7 +181,7 @@ export function ChecklistItemForm({
                 type="date"
                 className="field-input"
                 value={date}
-                onChange={(e) => setDate(e.target.value)}
+                onChange={(e) => set({ date: e.target.value })}
               />
             </label>
           ) : standard && standard.labelForm !== "standard-only" ? (
@@ -137,7 +194,7 @@ export function ChecklistItemForm({
                     inputMode="numeric"
                     placeholder="MM"
                     value={month}
-                    onChange={(e) => setMonth(e.target.value)}
+                    onChange={(e) => set({ month: e.target.value })}
                   />
                 </label>
               ) : null}
@@ -152,7 +209,7 @@ export function ChecklistItemForm({
                   inputMode="numeric"
                   placeholder="YYYY"
                   value={year}
-                  onChange={(e) => setYear(e.target.value)}
+                  onChange={(e) => set({ year: e.target.value })}
                 />
               </label>
             </>
@@ -165,41 +222,45 @@ export function ChecklistItemForm({
           className="field-input"
           placeholder="Comment (optional)"
           value={comment}
+          maxLength={commentMax}
+          aria-describedby={counterId}
           onChange={(e) => setComment(e.target.value)}
         />
+        <CharacterCount id={counterId} length={comment.length} max={commentMax} />
       </label>
       {error ? (
         <p className="field-error" role="alert">
           {error}
         </p>
       ) : null}
-      <div className="flex flex-wrap gap-2">
-        <button
-          type="button"
-          className="btn border-2 border-cleared bg-cleared-soft text-cleared"
-          onClick={() => void answer("pass")}
+      <div className="flex flex-wrap items-start gap-2">
+        <AnswerButton
+          tone="cleared"
+          pressed={chosen === "pass"}
+          onClick={() => void save("pass")}
           disabled={!canWrite}
         >
           Pass
-        </button>
-        <button
-          type="button"
-          className="btn border-2 border-stopped bg-stopped-soft text-stopped"
-          onClick={() => void answer("fail")}
+        </AnswerButton>
+        <AnswerButton
+          tone="stopped"
+          pressed={chosen === "fail"}
+          onClick={() => void save("fail")}
           disabled={!canWrite}
         >
           Fail
-        </button>
-        {item.notApplicableAllowed || !item.required ? (
-          <button
-            type="button"
-            className="btn-secondary"
-            onClick={() => void answer("not-applicable")}
+        </AnswerButton>
+        {item.notApplicableAllowed ? (
+          <AnswerButton
+            tone="neutral"
+            pressed={chosen === "not-applicable"}
+            onClick={() => void save("not-applicable")}
             disabled={!canWrite}
           >
             Not fitted
-          </button>
+          </AnswerButton>
         ) : null}
+        {answer ? <VoidOwnRecord target={answer} what={`your ${item.label} answer`} /> : null}
       </div>
     </li>
   );

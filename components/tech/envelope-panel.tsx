@@ -34,7 +34,7 @@ export function EnvelopePanel({ verdict }: { verdict: Verdict }) {
         Wing against the class
       </h2>
       <p className="text-base text-asphalt-700">
-        Preview from the readings on this phone; not to scale.
+        Preview from the readings on this device; not to scale.
       </p>
       {drawings.map(({ classId, props }) => (
         <ClassEnvelope key={classId} {...props} />

@@ -1,27 +1,51 @@
 "use client";
-import { useEffect, useState } from "react";
-import { loadPhotoBlob } from "@/lib/offline/load-photo-blob";
+import { useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import { RECORD_TEXT_LIMITS, type TechRecord } from "@/lib/scrutineer/record-schema";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
-import { shrinkPhoto } from "./shrink-photo";
+import { CharacterCount } from "./character-count";
+import { PhotoThumb } from "./photo-thumb";
+import { preparePhoto } from "./prepare-photo";
+import { recordByline } from "./record-byline";
 import { useTech } from "./tech-context";
+import { VoidOwnRecord } from "./void-own-record";
 
 type Photo = Extract<TechRecord, { kind: "photo" }>;
 type Note = Extract<TechRecord, { kind: "note" }>;
 
-/** Photos taken with the phone camera and notes on the car; kept on the phone until sent. */
+/** Photos taken with the camera and notes on the car, each with who and when; kept on the device until sent. */
 export function PhotosNotesPanel({ entryId, records }: { entryId: string; records: TechRecord[] }) {
-  const { eventId, official, deviceId, record, canWrite } = useTech();
+  const { eventId, pack, official, deviceId, record, canWrite } = useTech();
   const [caption, setCaption] = useState("");
   const [note, setNote] = useState("");
   const [busy, setBusy] = useState(false);
-  const photos = records.filter((r): r is Photo => r.kind === "photo");
+  const [photoError, setPhotoError] = useState<string | null>(null);
+  const voids = new Map(
+    records.flatMap((r) => (r.kind === "void" ? [[r.payload.targetRecordId, r] as const] : [])),
+  );
+  const photos = records.filter((r): r is Photo => r.kind === "photo" && !voids.has(r.id));
   const notes = records.filter((r): r is Note => r.kind === "note");
+  const byline = (r: TechRecord) =>
+    recordByline({
+      officialId: r.officialId,
+      deviceTime: r.deviceTime,
+      me: official.id,
+      officials: pack.officials,
+      timeZone: pack.event.timeZone,
+    });
 
-  const addPhoto = async (file: File | undefined) => {
+  const addPhoto = async (input: HTMLInputElement) => {
+    const file = input.files?.[0];
     if (!file) return;
     setBusy(true);
+    const prepared = await preparePhoto(file);
+    input.value = "";
+    if (!prepared.ok) {
+      setPhotoError(prepared.message);
+      setBusy(false);
+      return;
+    }
+    setPhotoError(null);
     const now = new Date();
     const draft = makeRecord({
       kind: "photo",
@@ -38,11 +62,13 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
         storageKey: photoStorageKey({ eventId, entryId, recordId: draft.id }),
       },
     };
-    await record(photo, await shrinkPhoto(file));
+    await record(photo, prepared.blob);
     setCaption("");
     setBusy(false);
   };
 
+  const captionMax = RECORD_TEXT_LIMITS.photoCaption;
+  const noteMax = RECORD_TEXT_LIMITS.note;
   return (
     <section className="space-y-3" aria-labelledby="photos-title">
       <h2 id="photos-title" className="text-2xl font-bold">
@@ -53,9 +79,12 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
         <input
           className="field-input"
           value={caption}
+          maxLength={captionMax}
+          aria-describedby="caption-count"
           onChange={(e) => setCaption(e.target.value)}
           placeholder="e.g. wing end plate, left"
         />
+        <CharacterCount id="caption-count" length={caption.length} max={captionMax} />
       </label>
       <label className={`btn-secondary w-full ${canWrite ? "" : "pointer-events-none opacity-60"}`}>
         {busy ? "Saving photo…" : "Take a photo"}
@@ -64,15 +93,20 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
           accept="image/*"
           capture="environment"
           className="sr-only"
-          onChange={(e) => void addPhoto(e.target.files?.[0])}
+          onChange={(e) => void addPhoto(e.currentTarget)}
           data-testid="photo-input"
           disabled={!canWrite}
         />
       </label>
+      {photoError ? (
+        <p className="field-error" role="alert" data-testid="photo-error">
+          {photoError}
+        </p>
+      ) : null}
       {photos.length > 0 ? (
         <ul className="grid grid-cols-3 gap-2" data-testid="photo-list">
           {photos.map((p) => (
-            <PhotoThumb key={p.id} photo={p} />
+            <PhotoThumb key={p.id} photo={p} byline={byline(p)} />
           ))}
         </ul>
       ) : null}
@@ -99,62 +133,31 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
             className="field-input min-h-24 py-2"
             value={note}
             onChange={(e) => setNote(e.target.value)}
-            maxLength={4000}
+            maxLength={noteMax}
+            aria-describedby="note-count"
           />
+          <CharacterCount id="note-count" length={note.length} max={noteMax} />
         </label>
         <button type="submit" className="btn-secondary" disabled={!canWrite || !note.trim()}>
           Save note
         </button>
       </form>
       {notes.length > 0 ? (
-        <ul className="space-y-1">
+        <ul className="space-y-1" data-testid="note-list">
           {notes.map((n) => (
-            <li key={n.id} className="rounded bg-asphalt-100 p-2 text-base">
-              {n.payload.text}
+            <li key={n.id} className="space-y-1 rounded bg-asphalt-100 p-2 text-base">
+              <p className={voids.has(n.id) ? "line-through opacity-70" : ""}>{n.payload.text}</p>
+              <div className="flex flex-wrap items-center justify-between gap-2">
+                <p className="text-sm text-asphalt-800" data-testid="note-byline">
+                  {byline(n)}
+                  {voids.has(n.id) ? ` · void: ${voids.get(n.id)?.payload.reason}` : ""}
+                </p>
+                {voids.has(n.id) ? null : <VoidOwnRecord target={n} what="your note" />}
+              </div>
             </li>
           ))}
         </ul>
       ) : null}
     </section>
-  );
-}
-
-function PhotoThumb({ photo }: { photo: Photo }) {
-  const { eventId, local } = useTech();
-  const [src, setSrc] = useState<string | null>(null);
-  const isLocal = local.some((l) => l.record.id === photo.id && l.blob !== "uploaded");
-  useEffect(() => {
-    let url: string | null = null;
-    let alive = true;
-    (async () => {
-      if (isLocal) {
-        const blob = await loadPhotoBlob(photo.id);
-        if (blob && alive) {
-          url = URL.createObjectURL(blob);
-          setSrc(url);
-        }
-      } else {
-        setSrc(`/api/events/${eventId}/photos/${photo.id}?entry=${photo.entryId}`);
-      }
-    })();
-    return () => {
-      alive = false;
-      if (url) URL.revokeObjectURL(url);
-    };
-  }, [eventId, isLocal, photo.id, photo.entryId]);
-  return (
-    <li className="overflow-hidden rounded-lg border border-asphalt-300 bg-asphalt-100">
-      {src ? (
-        // biome-ignore lint/performance/noImgElement: a blob: URL of a photo still on this phone; next/image cannot load it
-        <img
-          src={src}
-          alt={photo.payload.caption ?? "Tech-line photo"}
-          className="aspect-square w-full object-cover"
-        />
-      ) : (
-        <div className="aspect-square" />
-      )}
-      {photo.payload.caption ? <p className="p-1 text-sm">{photo.payload.caption}</p> : null}
-    </li>
   );
 }

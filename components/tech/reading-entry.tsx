@@ -1,13 +1,26 @@
 "use client";
-import { useState } from "react";
+import { useRef, useState } from "react";
+import { Caution } from "@/components/caution";
 import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
 import { makeRecord } from "@/lib/offline/make-record";
 import { convertMass } from "@/lib/scrutineer/convert-mass";
 import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
 import { parseLength } from "@/lib/scrutineer/parse-length";
-import { type Corner, type Dimension, SIGNED_DIMENSIONS } from "@/lib/scrutineer/record-schema";
+import {
+  type Corner,
+  type Dimension,
+  type ReadingPayload,
+  SIGNED_DIMENSIONS,
+  type TechRecordOf,
+} from "@/lib/scrutineer/record-schema";
+import {
+  compareWithOwnReadings,
+  type OwnReadingMismatch,
+} from "@/lib/tech/compare-with-own-readings";
 import { defaultInstruments } from "@/lib/tech/default-instruments";
 import { formatReadingValue } from "./format-reading-value";
+import { readingExample } from "./reading-example";
+import { ReadingMismatchWarning } from "./reading-mismatch-warning";
 import { sentenceCase } from "./sentence-case";
 import { useTech } from "./tech-context";
 
@@ -17,15 +30,22 @@ const unitOf = (d: Dimension) =>
 /**
  * Record one reading of one dimension: where it is taken (drawing), the value in the event's unit
  * (or any unit written with it), the instrument, and the conditions the rule set asks for.
+ * A reading that disagrees with the scrutineer's own earlier ones is held for a second look
+ * ("Save anyway" / "Fix it"), never refused.
  */
 export function ReadingEntry({
   entryId,
   dimension,
   corner,
+  earlier,
+  voided,
 }: {
   entryId: string;
   dimension: Dimension;
   corner: Corner | null;
+  /** This car's readings of this dimension (and corner) as the phone knows them. */
+  earlier: ReadonlyArray<TechRecordOf<"reading">>;
+  voided: ReadonlySet<string>;
 }) {
   const { ruleSet, pack, official, deviceId, record, canWrite } = useTech();
   const unitSystem = pack.event.unitSystem;
@@ -36,6 +56,11 @@ export function ReadingEntry({
   const [text, setText] = useState("");
   const [error, setError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
+  const [held, setHeld] = useState<{
+    payload: ReadingPayload;
+    mismatch: OwnReadingMismatch;
+  } | null>(null);
+  const input = useRef<HTMLInputElement>(null);
   const conditions =
     dimension === "cornerWeightKg" ? ruleSet.measurement.weighing : ruleSet.measurement.aero;
   const [driverAboard, setDriverAboard] = useState(conditions.driverAboard);
@@ -75,7 +100,23 @@ export function ReadingEntry({
     const payload =
       dimension === "cornerWeightKg"
         ? { ...base, dimension, corner: corner ?? "lf" }
-        : ({ ...base, dimension } as Parameters<typeof makeRecord<"reading">>[0]["payload"]);
+        : ({ ...base, dimension } as ReadingPayload);
+    const mismatch = compareWithOwnReadings({
+      reading: payload,
+      officialId: official.id,
+      earlier,
+      voided,
+      k: ruleSet.decisionRule.k,
+    });
+    if (mismatch) {
+      setHeld({ payload, mismatch });
+      return;
+    }
+    await keep(payload);
+  };
+
+  const keep = async (payload: ReadingPayload) => {
+    setHeld(null);
     await record(
       makeRecord({
         kind: "reading",
@@ -87,22 +128,24 @@ export function ReadingEntry({
       }),
     );
     setText("");
-    setSaved(`Saved on this phone: ${label} ${formatReadingValue(dimension, value, unitSystem)}`);
+    setSaved(
+      `Saved on this phone: ${label} ${formatReadingValue(dimension, payload.value, unitSystem)}`,
+    );
   };
 
-  const placeholder =
-    kind === "mm"
-      ? unitSystem === "mm"
-        ? "e.g. 1380 mm"
-        : 'e.g. 54 3/8"'
-      : kind === "kg"
-        ? `e.g. 312 (${massUnit})`
-        : "e.g. 98.5";
   return (
     <div
       className="space-y-3"
       data-testid={`reading-entry-${dimension}${corner ? `-${corner}` : ""}`}
     >
+      {dimension === "noiseDbA" ? (
+        <Caution title="Noise test: engine running">
+          This reading is taken with the engine running (
+          {ruleSet.noise?.method ?? "¾ of maximum engine speed"}). Car secured (handbrake on, wheels
+          chocked, in neutral or park), nobody in front of or behind the car, hearing protection on,
+          and the chief scrutineer decides how the test is run.
+        </Caution>
+      ) : null}
       <div className="mx-auto max-w-xs">
         <ReadingDiagram dimension={dimension} {...(corner ? { corner } : {})} />
       </div>
@@ -119,9 +162,13 @@ export function ReadingEntry({
           <input
             className="field-input tabular text-2xl"
             inputMode={kind === "mm" && unitSystem === "in" ? "text" : "decimal"}
-            placeholder={placeholder}
+            placeholder={readingExample(dimension, unitSystem)}
             value={text}
-            onChange={(e) => setText(e.target.value)}
+            onChange={(e) => {
+              setText(e.target.value);
+              setHeld(null);
+            }}
+            ref={input}
             aria-invalid={error ? true : undefined}
             data-testid="reading-value"
             disabled={!canWrite}
@@ -167,9 +214,25 @@ export function ReadingEntry({
             driver aboard {conditions.driverAboard ? "(the rule says yes)" : "(the rule says no)"}
           </label>
         </fieldset>
-        <button type="submit" className="btn-primary w-full" disabled={!canWrite}>
-          Save reading
-        </button>
+        {held ? (
+          <ReadingMismatchWarning
+            label={label}
+            value={formatReadingValue(dimension, held.payload.value, unitSystem)}
+            earlierMean={formatReadingValue(dimension, held.mismatch.earlierMean, unitSystem)}
+            earlierCount={held.mismatch.earlierCount}
+            allowed={formatReadingValue(dimension, held.mismatch.allowedDifference, unitSystem)}
+            onSaveAnyway={() => void keep(held.payload)}
+            onFix={() => {
+              setHeld(null);
+              input.current?.focus();
+              input.current?.select();
+            }}
+          />
+        ) : (
+          <button type="submit" className="btn-primary w-full" disabled={!canWrite}>
+            Save reading
+          </button>
+        )}
         {saved ? (
           <p className="text-base font-semibold text-cleared" role="status">
             {saved}

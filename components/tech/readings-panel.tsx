@@ -8,6 +8,7 @@ import { ReadingEntry } from "./reading-entry";
 import { readingTargets } from "./reading-targets";
 import { sentenceCase } from "./sentence-case";
 import { useTech } from "./tech-context";
+import { VoidOwnRecord } from "./void-own-record";
 
 type Reading = Extract<TechRecord, { kind: "reading" }>;
 
@@ -23,9 +24,10 @@ export function ReadingsPanel({
 }) {
   const { pack, local, official } = useTech();
   const [open, setOpen] = useState<string | null>(null);
-  const voided = new Set(
-    records.flatMap((r) => (r.kind === "void" ? [r.payload.targetRecordId] : [])),
+  const voids = new Map(
+    records.flatMap((r) => (r.kind === "void" ? [[r.payload.targetRecordId, r] as const] : [])),
   );
+  const voided = new Set(voids.keys());
   const readings = records.filter((r): r is Reading => r.kind === "reading");
   const nameOf = (id: string) =>
     id === official.id
@@ -83,22 +85,36 @@ export function ReadingsPanel({
                             {mine.map((r) => (
                               <li
                                 key={r.id}
-                                className={`tabular text-base ${voided.has(r.id) ? "line-through opacity-70" : ""}`}
+                                className="flex flex-wrap items-center justify-between gap-2"
                               >
-                                <strong>
-                                  {formatReadingValue(
-                                    r.payload.dimension,
-                                    r.payload.value,
-                                    pack.event.unitSystem,
-                                  )}
-                                </strong>{" "}
-                                by {nameOf(r.officialId)} · {r.payload.instrument.name} ·{" "}
-                                {stateOf(r.id)
-                                  ? stateOf(r.id) === "sent" || stateOf(r.id) === "duplicate"
-                                    ? "sent"
-                                    : "on this phone"
-                                  : "on the server"}
-                                {voided.has(r.id) ? " · void" : ""}
+                                <span
+                                  className={`tabular text-base ${voided.has(r.id) ? "line-through opacity-70" : ""}`}
+                                >
+                                  <strong>
+                                    {formatReadingValue(
+                                      r.payload.dimension,
+                                      r.payload.value,
+                                      pack.event.unitSystem,
+                                    )}
+                                  </strong>{" "}
+                                  by {nameOf(r.officialId)} · {r.payload.instrument.name} ·{" "}
+                                  {stateOf(r.id)
+                                    ? stateOf(r.id) === "sent" || stateOf(r.id) === "duplicate"
+                                      ? "sent"
+                                      : "on this phone"
+                                    : "on the server"}
+                                  {voided.has(r.id) ? " · void" : ""}
+                                </span>
+                                {voided.has(r.id) ? (
+                                  <span className="w-full text-base text-asphalt-800">
+                                    Void: {voids.get(r.id)?.payload.reason}
+                                  </span>
+                                ) : (
+                                  <VoidOwnRecord
+                                    target={r}
+                                    what={`your reading of ${formatReadingValue(r.payload.dimension, r.payload.value, pack.event.unitSystem)}`}
+                                  />
+                                )}
                               </li>
                             ))}
                           </ul>
@@ -107,6 +123,8 @@ export function ReadingsPanel({
                           entryId={entryId}
                           dimension={target.dimension}
                           corner={target.corner}
+                          earlier={mine}
+                          voided={voided}
                         />
                       </div>
                     ) : null}

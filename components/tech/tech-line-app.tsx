@@ -9,7 +9,7 @@ import { mergeEntryRecords } from "@/lib/offline/merge-entry-records";
 import { prepareForOffline } from "@/lib/offline/prepare-for-offline";
 import { previewVerdict } from "@/lib/offline/preview-verdict";
 import { requestBackgroundSync } from "@/lib/offline/request-background-sync";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import { recordSchema, type TechRecord } from "@/lib/scrutineer/record-schema";
 import { CarCard } from "./car-card";
 import { FindCar } from "./find-car";
 import { OutboxPanel } from "./outbox-panel";
@@ -116,6 +116,11 @@ export function TechLineApp(props: {
 
   if (data.loading || !deviceId) return <p className="card">Opening the tech line…</p>;
   const { pack, ruleSet } = data;
+  const packRecord = (id: string) => {
+    const raw = pack?.records.find((r) => r.id === id);
+    const parsed = raw ? recordSchema.safeParse(raw) : null;
+    return parsed?.success ? parsed.data : undefined;
+  };
   const fetchNote = data.lastFetch?.message ?? null;
   const header = (
     <div className="space-y-3">
@@ -132,8 +137,12 @@ export function TechLineApp(props: {
         local={data.local}
         online={outbox.online}
         running={outbox.running}
-        onSendNow={() => void outbox.drain()}
+        onSendNow={() => void outbox.sendNow()}
         carNumberOf={(id) => pack?.entries.find((e) => e.entryId === id)?.carNumber}
+        unitSystem={pack?.event.unitSystem ?? "mm"}
+        itemLabel={(id) => ruleSet?.safety.checklist.find((i) => i.id === id)?.label}
+        className={(id) => ruleSet?.classes.find((c) => c.id === id)?.name}
+        findRecord={(id) => data.local.find((l) => l.record.id === id)?.record ?? packRecord(id)}
       />
     </div>
   );

@@ -1,21 +1,17 @@
 "use client";
 import { VerdictBadge } from "@/components/verdict-badge";
 import type { RuleSet } from "@/lib/scrutineer/rule-set-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { RuleResult, Verdict } from "@/lib/scrutineer/verdict-schema";
+import { checklistItemState, type StateTone } from "./checklist-item-state";
+import { StateMark } from "./state-mark";
 
-const outcomeWord: Record<string, string> = {
-  pass: "inside",
-  fail: "over",
-  inconclusive: "unsure",
-  waiting: "to measure",
-  "not-applicable": "n/a",
-};
-const outcomeClass: Record<string, string> = {
-  pass: "text-cleared",
-  fail: "text-stopped",
-  inconclusive: "text-attention",
-  waiting: "text-asphalt-700",
-  "not-applicable": "text-asphalt-700",
+/** A limit's outcome in our words (DESIGN.md): too close to call is what sends a car to re-measure. */
+const ruleMark: Record<RuleResult["outcome"], { tone: StateTone; word: string }> = {
+  pass: { tone: "cleared", word: "inside" },
+  fail: { tone: "stopped", word: "over" },
+  inconclusive: { tone: "attention", word: "too close to call" },
+  waiting: { tone: "waiting", word: "to measure" },
+  "not-applicable": { tone: "neutral", word: "n/a" },
 };
 
 /** A verdict with its one-line reason and, on request, every rule and safety item behind it. */
@@ -57,10 +53,7 @@ export function VerdictView({
             <li className="font-semibold">Class {check.className}</li>
             {check.rules.map((rule) => (
               <li key={`${check.classId}-${rule.ruleId}`} className="text-base">
-                <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>
-                  {outcomeWord[rule.outcome]}
-                </span>{" "}
-                — {rule.reason}
+                <StateMark {...ruleMark[rule.outcome]} /> — {rule.reason}
               </li>
             ))}
           </ul>
@@ -68,19 +61,18 @@ export function VerdictView({
         <ul className="mt-2 space-y-1">
           <li className="font-semibold">Safety</li>
           {verdict.safety.map((item) => (
-            <li key={item.itemId} className="text-base">
-              <span className={`font-semibold ${outcomeClass[item.outcome] ?? ""}`}>
-                {outcomeWord[item.outcome]}
-              </span>{" "}
-              — {item.reason}
+            <li
+              key={item.itemId}
+              className="text-base"
+              data-testid={`verdict-safety-${item.itemId}`}
+              data-tone={checklistItemState(item).tone}
+            >
+              <StateMark {...checklistItemState(item)} /> — {item.reason}
             </li>
           ))}
           {verdict.eventRules.map((rule) => (
             <li key={rule.ruleId} className="text-base">
-              <span className={`font-semibold ${outcomeClass[rule.outcome] ?? ""}`}>
-                {outcomeWord[rule.outcome]}
-              </span>{" "}
-              — {rule.reason}
+              <StateMark {...ruleMark[rule.outcome]} /> — {rule.reason}
             </li>
           ))}
         </ul>

@@ -36,7 +36,12 @@ const UNIT_WORDS: ReadonlyArray<[RegExp, LengthUnit]> = [
   [/^(ft|foot|feet|')$/i, "ft"],
 ];
 
-const EXAMPLE = 'write it like 64.5 in, 64 1/2" or 1638.3 mm';
+/** How to write a length, led by the event's own unit (inches first when none is given). */
+function exampleFor(unit: "mm" | "in" | undefined): string {
+  return unit === "mm"
+    ? 'write it like 1638.3 mm, 64.5 in or 64 1/2"'
+    : 'write it like 64.5 in, 64 1/2" or 1638.3 mm';
+}
 
 /** Reads an unsigned amount: 64.5, 5., .5, 1/4, 64 1/2, 64-1/2, 64½. Returns null when it is not one. */
 function parseAmount(text: string): number | { error: string } | null {
@@ -69,6 +74,7 @@ function unitOf(word: string): LengthUnit | null {
  */
 export function parseLength(text: string, options: ParseLengthOptions = {}): ParseLengthResult {
   const maxAbsMm = options.maxAbsMm ?? READING_LIMITS.length.max;
+  const example = exampleFor(options.defaultUnit);
   const t = text
     .replace(/[−–]/g, "-")
     .replace(/[″”“]/g, '"')
@@ -77,12 +83,12 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
     .replace(/⁄/g, "/")
     .trim()
     .replace(/([a-z])\.$/i, "$1"); // "5 in." → "5 in"
-  if (t === "") return { ok: false, message: `Enter a length; ${EXAMPLE}.` };
-  if (t.length > 40) return { ok: false, message: `That is too long for one length; ${EXAMPLE}.` };
+  if (t === "") return { ok: false, message: `Enter a length; ${example}.` };
+  if (t.length > 40) return { ok: false, message: `That is too long for one length; ${example}.` };
   if (t.includes(",")) {
     return {
       ok: false,
-      message: `Use a point for decimals and no thousands separator; ${EXAMPLE}.`,
+      message: `Use a point for decimals and no thousands separator; ${example}.`,
     };
   }
   const signMatch = /^([+-])\s*/.exec(t);
@@ -111,17 +117,17 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
     if (unitText === undefined && inside?.[2] !== undefined && unitOf(inside[2]) !== null) {
       return {
         ok: false,
-        message: `Check the order in "${text.trim()}": the unit goes after the number, and feet before inches (5' 3"); ${EXAMPLE}.`,
+        message: `Check the order in "${text.trim()}": the unit goes after the number, and feet before inches (5' 3"); ${example}.`,
       };
     }
     if (amountText === "" || (unitText === undefined && /\p{L}/u.test(body))) {
-      return { ok: false, message: `Could not read "${text.trim()}" as a length; ${EXAMPLE}.` };
+      return { ok: false, message: `Could not read "${text.trim()}" as a length; ${example}.` };
     }
     const amount = parseAmount(amountText);
     if (amount === null) {
       return {
         ok: false,
-        message: `Could not read the number in "${text.trim()}"; ${EXAMPLE}.`,
+        message: `Could not read the number in "${text.trim()}"; ${example}.`,
       };
     }
     if (typeof amount !== "number")
@@ -129,18 +135,18 @@ export function parseLength(text: string, options: ParseLengthOptions = {}): Par
     if (unitText !== undefined) {
       unit = unitOf(unitText);
       if (unit === null) {
-        return { ok: false, message: `Unknown unit "${unitText}"; use mm or in (${EXAMPLE}).` };
+        return { ok: false, message: `Unknown unit "${unitText}"; use mm or in (${example}).` };
       }
     } else if (options.defaultUnit !== undefined) {
       unit = options.defaultUnit;
     } else {
-      return { ok: false, message: `Add a unit, mm or in; ${EXAMPLE}.` };
+      return { ok: false, message: `Add a unit, mm or in; ${example}.` };
     }
     mm = convertLength(amount, unit, "mm");
   }
 
   if (unit === null || !Number.isFinite(mm)) {
-    return { ok: false, message: `Could not read "${text.trim()}" as a length; ${EXAMPLE}.` };
+    return { ok: false, message: `Could not read "${text.trim()}" as a length; ${example}.` };
   }
   const signed = negative ? -mm : mm;
   if (negative && mm !== 0 && options.allowNegative !== true) {
