@@ -226,8 +226,8 @@ export function ChecklistItemForm({
           aria-describedby={counterId}
           onChange={(e) => setComment(e.target.value)}
         />
-        <CharacterCount id={counterId} length={comment.length} max={commentMax} />
       </label>
+      <CharacterCount id={counterId} length={comment.length} max={commentMax} />
       {error ? (
         <p className="field-error" role="alert">
           {error}

@@ -84,8 +84,8 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
           onChange={(e) => setCaption(e.target.value)}
           placeholder="e.g. wing end plate, left"
         />
-        <CharacterCount id="caption-count" length={caption.length} max={captionMax} />
       </label>
+      <CharacterCount id="caption-count" length={caption.length} max={captionMax} />
       <label className={`btn-secondary w-full ${canWrite ? "" : "pointer-events-none opacity-60"}`}>
         {busy ? "Saving photo…" : "Take a photo"}
         <input
@@ -136,8 +136,8 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
             maxLength={noteMax}
             aria-describedby="note-count"
           />
-          <CharacterCount id="note-count" length={note.length} max={noteMax} />
         </label>
+        <CharacterCount id="note-count" length={note.length} max={noteMax} />
         <button type="submit" className="btn-secondary" disabled={!canWrite || !note.trim()}>
           Save note
         </button>

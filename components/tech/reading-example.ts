@@ -37,11 +37,12 @@ function inchesAsTapeReads(inches: number): string {
  * unit ("e.g. 6 mm" for an end plate, 'e.g. 57 1/8"' for a wing top at an inch event).
  */
 export function readingExample(dimension: Dimension, unitSystem: "mm" | "in"): string {
-  if (dimension === "noiseDbA") return `e.g. ${EXAMPLE_DBA} dB(A)`;
+  // Weights and levels are typed as bare numbers; the unit is said after the example.
+  if (dimension === "noiseDbA") return `e.g. ${EXAMPLE_DBA}, in dB(A)`;
   if (dimension === "cornerWeightKg") {
     return unitSystem === "mm"
-      ? `e.g. ${EXAMPLE_KG} kg`
-      : `e.g. ${Math.round(convertMass(EXAMPLE_KG, "kg", "lb") / 5) * 5} lb`;
+      ? `e.g. ${EXAMPLE_KG}, in kg`
+      : `e.g. ${Math.round(convertMass(EXAMPLE_KG, "kg", "lb") / 5) * 5}, in lb`;
   }
   const mm = EXAMPLE_MM[dimension];
   return unitSystem === "mm"
