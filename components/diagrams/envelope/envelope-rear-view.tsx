@@ -50,9 +50,10 @@ export function EnvelopeRearView({
   const margin = envelopeMarginText(span, unit);
   // Span and body on one line when it fits the drawing's width, else one line each.
   const together = `${spanWords} · ${bodyWords}`;
+  // With no limit the margin line already says so; the allowance would say it again.
   const notes = [
     ...(together.length <= SLOT_CHARS ? [together] : [spanWords, bodyWords]),
-    allowance,
+    ...(span.limitMm === null ? [] : [allowance]),
   ];
   // The words take the top band; the wing's end plates start under it, whatever its length.
   const lines = (margin === look.word ? 0 : wrapWords(margin, SLOT_CHARS).length) + notes.length;
