@@ -1,16 +1,21 @@
+import { overrideTargetProblem } from "./override-target-problem";
 import type { TechRecordOf } from "./record-schema";
 import type { RuleSet } from "./rule-set-schema";
 import type { SettledVerdict } from "./settle-verdict";
 import type { Verdict } from "./verdict-schema";
 
 /** The verdict after the chief scrutineer's override, or the computed one when there is none. */
-export type Overridden = SettledVerdict & { override: Verdict["override"]; invalid: boolean };
+export type Overridden = SettledVerdict & {
+  override: Verdict["override"];
+  rejectedOverride: Verdict["rejectedOverride"];
+};
 
 /**
  * Applies the latest effective override: it sets the final status and class, and the reason
  * says it is the chief scrutineer's decision and why (who decided stays in `override.officialId`,
- * never in the words); the computed result stays alongside. An override naming an unknown
- * class, or "moved-up" to a class not above the declared one, is ignored (and flagged).
+ * never in the words); the computed result stays alongside. An override that does not fit the
+ * rule set and the declared class ({@link overrideTargetProblem}) is ignored and returned as
+ * `rejectedOverride` with the reason in words.
  */
 export function applyOverride(args: {
   computed: SettledVerdict;
@@ -19,16 +24,29 @@ export function applyOverride(args: {
   declaredClassId: string;
 }): Overridden {
   const { computed, override, ruleSet } = args;
-  if (override === null) return { ...computed, override: null, invalid: false };
+  if (override === null) return { ...computed, override: null, rejectedOverride: null };
   const p = override.payload;
-  const index = p.classId === null ? -1 : ruleSet.classes.findIndex((c) => c.id === p.classId);
-  const declaredIndex = ruleSet.classes.findIndex((c) => c.id === args.declaredClassId);
-  const valid =
-    p.status === "held"
-      ? p.classId === null
-      : index >= 0 && (p.status === "cleared" || index > declaredIndex);
-  if (!valid) return { ...computed, override: null, invalid: true };
-  const name = ruleSet.classes[index]?.name ?? "";
+  const problem = overrideTargetProblem({
+    classes: ruleSet.classes,
+    declaredClassId: args.declaredClassId,
+    status: p.status,
+    classId: p.classId,
+  });
+  if (problem !== null) {
+    return {
+      ...computed,
+      override: null,
+      rejectedOverride: {
+        recordId: override.id,
+        officialId: override.officialId,
+        deviceTime: override.deviceTime,
+        status: p.status,
+        classId: p.classId,
+        problem,
+      },
+    };
+  }
+  const name = ruleSet.classes.find((c) => c.id === p.classId)?.name ?? "";
   const decision =
     p.status === "held"
       ? "held"
@@ -50,6 +68,6 @@ export function applyOverride(args: {
       computedClassId: computed.classId,
       computedReason: computed.reason,
     },
-    invalid: false,
+    rejectedOverride: null,
   };
 }

@@ -103,7 +103,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     ruleSet,
     declaredClassId: entry.declaredClassId,
   });
-  if (final.invalid) flags.add("override-invalid");
+  if (final.rejectedOverride !== null) flags.add("override-invalid");
   if (final.override !== null) flags.add("overridden");
   if (summaries.some((d) => d.disagreements.length > 0)) flags.add("disagreement");
   const classChecks = finishRuleReasons(walk, ruleSet.classes);
@@ -128,6 +128,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     reason: final.reason,
     flags: VERDICT_FLAGS.filter((f) => flags.has(f)),
     override: final.override,
+    rejectedOverride: final.rejectedOverride,
     classChecks,
     eventRules: eventRules.map((r) => ({
       ...r,

@@ -179,6 +179,20 @@ export const verdictSchema = z.object({
       computedReason: z.string(),
     })
     .nullable(),
+  /** The latest override when it does not fit the rule set or the declared class: it is ignored
+   * (the computed verdict stands, flagged "override-invalid") and this says why. Absent in
+   * verdicts stored before it existed. */
+  rejectedOverride: z
+    .object({
+      recordId: z.string(),
+      officialId: z.string(),
+      deviceTime: z.string(),
+      status: z.enum(["cleared", "moved-up", "held"]),
+      classId: z.string().nullable(),
+      problem: z.string(),
+    })
+    .nullable()
+    .default(null),
   classChecks: z.array(classCheckSchema),
   eventRules: z.array(ruleResultSchema),
   safety: z.array(safetyItemResultSchema),
