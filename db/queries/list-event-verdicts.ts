@@ -1,5 +1,7 @@
 import "server-only";
 import { eq } from "drizzle-orm";
+import type { Verdict } from "../../lib/scrutineer/verdict-schema";
+import { toPackVerdict } from "../../lib/tech/to-pack-verdict";
 import { getDb } from "../client";
 import { verdicts } from "../schema";
 
@@ -11,21 +13,24 @@ export async function listEventVerdicts({ eventId }: { eventId: string }) {
       status: verdicts.status,
       classId: verdicts.finalClass,
       reason: verdicts.reason,
-      needsChief: verdicts.needsChief,
       result: verdicts.result,
       computedAt: verdicts.computedAt,
     })
     .from(verdicts)
     .where(eq(verdicts.eventId, eventId));
-  return rows.map((r) => ({
-    entryId: r.entryId,
-    status: r.status,
-    classId: r.classId,
-    reason: r.reason,
-    needsChief: r.needsChief,
-    flags: ((r.result as { flags?: string[] } | null)?.flags ?? []).filter(
-      (f) => typeof f === "string",
-    ),
-    computedAt: r.computedAt.toISOString(),
-  }));
+  return rows.map((r) => {
+    const result = (r.result ?? {}) as Partial<Verdict>;
+    return toPackVerdict({
+      entryId: r.entryId,
+      verdict: {
+        status: r.status,
+        classId: r.classId,
+        reason: r.reason,
+        flags: (result.flags ?? []).filter((f) => typeof f === "string"),
+        override: result.override ?? null,
+        rejectedOverride: result.rejectedOverride ?? null,
+      },
+      computedAt: r.computedAt,
+    });
+  });
 }

@@ -21,6 +21,13 @@ export const packVerdictSchema = z.object({
   reason: z.string(),
   flags: z.array(z.string()),
   needsChief: z.boolean(),
+  /** Who made the chief scrutineer's decision that stands, on their device's clock. */
+  override: z.object({ officialId: z.string(), deviceTime: z.string() }).nullable().default(null),
+  /** The latest override when the engine could not apply it, and why (flag "override-invalid"). */
+  rejectedOverride: z
+    .object({ officialId: z.string(), deviceTime: z.string(), problem: z.string() })
+    .nullable()
+    .default(null),
   computedAt: z.string(),
 });
 

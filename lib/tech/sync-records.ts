@@ -8,11 +8,11 @@ import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
 import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 import { describeRecordIssue } from "./describe-record-issue";
-import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 import { notifyVerdictChanges } from "./notify-verdict-changes";
 import { recomputeVerdicts } from "./recompute-verdicts";
 import { recordRefusal } from "./record-refusal";
 import type { SyncRecordResult, SyncResponse } from "./sync-schema";
+import { toPackVerdict } from "./to-pack-verdict";
 
 /**
  * Accept a batch from a phone's outbox: check every record on its own (shape, who made it, the
@@ -116,14 +116,8 @@ export async function syncRecords({
   return {
     results,
     receivedAt: now.toISOString(),
-    verdicts: changes.map(({ entryId, verdict }) => ({
-      entryId,
-      status: verdict.status,
-      classId: verdict.classId,
-      reason: verdict.reason,
-      flags: verdict.flags,
-      needsChief: needsChiefScrutineer(verdict),
-      computedAt: now.toISOString(),
-    })),
+    verdicts: changes.map(({ entryId, verdict }) =>
+      toPackVerdict({ entryId, verdict, computedAt: now }),
+    ),
   };
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { PackVerdict } from "../offline/event-pack-schema";
 
 /** Most records a phone may send in one batch; the outbox sends smaller batches. */
 export const MAX_SYNC_BATCH = 200;
@@ -13,15 +14,8 @@ export type SyncRecordResult =
   | { id: string; status: "stored" | "duplicate" }
   | { id: string | null; status: "refused"; reason: string };
 
-export type SyncVerdict = {
-  entryId: string;
-  status: "waiting" | "cleared" | "moved-up" | "re-measure" | "held";
-  classId: string | null;
-  reason: string;
-  flags: string[];
-  needsChief: boolean;
-  computedAt: string;
-};
+/** A verdict in the sync answer: the same short form as the event pack's. */
+export type SyncVerdict = PackVerdict;
 
 export type SyncResponse = {
   results: SyncRecordResult[];
