@@ -37,6 +37,11 @@ export function EntryResultView({ entryId }: { entryId: string }) {
       <p className="text-xl font-semibold" data-testid="entry-result-reason">
         {data.reason}
       </p>
+      {data.decidedBy ? (
+        <p className="text-base font-semibold" data-testid="entry-result-decided-by">
+          Decided by {data.decidedBy}.
+        </p>
+      ) : null}
       {data.computedAt ? (
         <p className="text-base text-asphalt-700">
           As of{" "}

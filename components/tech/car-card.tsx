@@ -5,6 +5,7 @@ import { VerdictBadge } from "@/components/verdict-badge";
 import { mergeEntryRecords } from "@/lib/offline/merge-entry-records";
 import { previewVerdict } from "@/lib/offline/preview-verdict";
 import { ChecklistPanel } from "./checklist-panel";
+import { ChiefDecisionNote } from "./chief-decision-note";
 import { ChiefPanel } from "./chief-panel";
 import { EnvelopePanel } from "./envelope-panel";
 import { PhotosNotesPanel } from "./photos-notes-panel";
@@ -85,6 +86,11 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
             <p className="text-lg" data-testid="server-verdict-reason">
               {server.reason}
             </p>
+            <ChiefDecisionNote
+              override={server.override}
+              rejectedOverride={server.rejectedOverride}
+              testId="server-verdict"
+            />
           </div>
         ) : (
           <p className="text-base" data-testid="server-verdict" data-status="none">
@@ -97,6 +103,14 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
             ruleSet={ruleSet}
             label="Preview on this device"
             testId="preview-verdict"
+          />
+        ) : null}
+        {preview ? (
+          <ChiefDecisionNote
+            override={preview.override}
+            rejectedOverride={preview.rejectedOverride}
+            testId="preview-verdict"
+            unlessShownWith={server}
           />
         ) : null}
       </section>

@@ -12,6 +12,8 @@ export type EntryResult = {
   status: VerdictWord;
   className: string | null;
   reason: string;
+  /** When the chief scrutineer's decision stands: "Helen Marsh at 10:42 on Sat 16 May". */
+  decidedBy: string | null;
   /** One line per rule or safety item that decided the verdict (over, unsure or failed first). */
   lines: { outcome: string; reason: string }[];
   notice: string | null;

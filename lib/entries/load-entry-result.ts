@@ -2,11 +2,13 @@ import "server-only";
 import { getEntryVerdict } from "../../db/queries/get-entry-verdict";
 import { getEventRoles } from "../../db/queries/get-event-roles";
 import { isOwnEntry } from "../../db/queries/is-own-entry";
+import { listEventOfficials } from "../../db/queries/list-event-officials";
 import type { SessionUser } from "../auth/get-session-user";
 import { can } from "../auth/permissions";
 import { AppError } from "../errors";
 import { classNamesFromRuleSet } from "../passes/class-names-from-rule-set";
 import type { Verdict } from "../scrutineer/verdict-schema";
+import { formatWhoAndWhen } from "../tech/format-who-and-when";
 import type { EntryResult } from "./entry-result";
 
 /**
@@ -48,6 +50,13 @@ export async function loadEntryResult({
     .filter((r) => r.outcome !== "not-applicable")
     .map((r) => ({ outcome: r.outcome, reason: r.reason }))
     .sort((a, b) => (order[a.outcome] ?? 9) - (order[b.outcome] ?? 9));
+  // Who decided is the official's name from the event's list, never an id.
+  const override = verdict?.override ?? null;
+  const decider = override
+    ? (await listEventOfficials({ eventId: row.eventId })).find(
+        (o) => o.userId === override.officialId,
+      )
+    : undefined;
   return {
     entryId: row.entryId,
     eventId: row.eventId,
@@ -59,6 +68,13 @@ export async function loadEntryResult({
     status: row.status ?? "waiting",
     className: className(row.finalClass),
     reason: row.reason ?? "Not scrutineered yet. Bring the car and your pass to the tech line.",
+    decidedBy: override
+      ? formatWhoAndWhen({
+          name: decider ? (decider.name ?? decider.email) : null,
+          deviceTime: override.deviceTime,
+          timeZone: row.timeZone,
+        })
+      : null,
     lines,
     notice: verdict?.notice ?? null,
     computedAt: row.computedAt ? row.computedAt.toISOString() : null,

@@ -1,11 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Caution } from "@/components/caution";
-import { EntryList } from "@/components/entry-list";
 import { EventHeading } from "@/components/event-heading";
-import { listEventEntries } from "@/db/queries/list-event-entries";
+import { ChiefQueue } from "@/components/tech/chief-queue";
 import { loadEventPage } from "@/lib/auth/load-event-page";
-import { toEntryListRow } from "@/lib/entries/to-entry-list-row";
+import { loadChiefQueue } from "@/lib/tech/load-chief-queue";
 
 export const metadata: Metadata = { title: "Chief scrutineer" };
 
@@ -16,9 +15,7 @@ export default async function ChiefPage({ params }: { params: Promise<{ eventId:
     permission: "verdicts.override",
     returnTo: `/tech/${eventId}/chief`,
   });
-  const rows = (await listEventEntries({ eventId }))
-    .filter((row) => row.needsChief || row.status === "re-measure" || row.status === "held")
-    .map(toEntryListRow);
+  const { waiting, decided } = await loadChiefQueue({ eventId, timeZone: event.timeZone });
   return (
     <div>
       <EventHeading roleLabel="Chief scrutineer" title="Cars that need your decision" event={event}>
@@ -31,10 +28,27 @@ export default async function ChiefPage({ params }: { params: Promise<{ eventId:
           Readings that disagree, inconclusive measurements and held cars wait here. A void or
           override needs a written reason and is kept with your name.
         </Caution>
-        <EntryList
-          rows={rows}
+        <p className="text-base text-asphalt-700" aria-live="polite">
+          {waiting.length} {waiting.length === 1 ? "car waits" : "cars wait"} for you. Tap a car to
+          open its car card.
+        </p>
+        <ChiefQueue
+          eventId={eventId}
+          rows={waiting}
+          testId="chief-queue"
           emptyText="Nothing waiting for you. Every car is either cleared or still in the queue."
         />
+        <section className="space-y-3" aria-labelledby="chief-decided-title">
+          <h2 id="chief-decided-title" className="text-2xl font-bold">
+            Decided by the chief scrutineer
+          </h2>
+          <ChiefQueue
+            eventId={eventId}
+            rows={decided}
+            testId="chief-decided"
+            emptyText="No overrides yet."
+          />
+        </section>
       </div>
     </div>
   );
