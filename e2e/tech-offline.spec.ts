@@ -8,7 +8,10 @@ import { SignInPage } from "./pages/sign-in-page";
 import { TechLinePage } from "./pages/tech-line-page";
 import { chromiumArgs } from "./support/chromium-args";
 import { forgePass } from "./support/forge-pass";
+import { localRecordIds } from "./support/local-record-ids";
+import { takeOffline } from "./support/network-switch";
 import { makePassVideo } from "./support/pass-video";
+import { serverRecordsOf } from "./support/server-records";
 
 /** A small grey PNG standing in for a phone photo of the car. */
 function photoPng(): Buffer {
@@ -64,9 +67,10 @@ test("the tech line offline: prepare, scan, record, reload offline, sync, verdic
   await page.reload();
   expect(await page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true);
   await tech.prepareForOffline();
+  const before = await serverRecordsOf(entryId);
 
-  // Into the concrete pit: no signal from here on.
-  await context.setOffline(true);
+  // Into the concrete pit: no signal from here on, for the page and its service worker alike.
+  const offline = await takeOffline(context, baseURL ?? "");
   await page.reload();
   await expect(page.getByRole("heading", { name: "Scrutineering" })).toBeVisible();
   await expect(page.getByTestId("pack-fetched-at")).toBeVisible();
@@ -108,6 +112,8 @@ test("the tech line offline: prepare, scan, record, reload offline, sync, verdic
   await expect(page.getByTestId("photo-list").locator("li")).toHaveCount(1);
   await expect(page.getByTestId("preview-verdict")).toHaveAttribute("data-status", "held");
   await expect(tech.outboxSummary()).toContainText("0 of 7 sent · 7 waiting");
+  // The server has nothing new: read from its database, not from what the page says.
+  expect(await serverRecordsOf(entryId)).toEqual(before);
 
   // Reload while still offline: the car card comes back, and everything is still queued.
   await page.reload();
@@ -120,9 +126,23 @@ test("the tech line offline: prepare, scan, record, reload offline, sync, verdic
   await tech.back();
   await tech.openByNumber(7);
 
+  // Still nothing on the server, whatever the service worker tried (the switch stopped it).
+  const phoneIds = await localRecordIds(page, entryId);
+  expect(phoneIds).toHaveLength(7);
+  expect(await serverRecordsOf(entryId)).toEqual(before);
+  testInfo.annotations.push({
+    type: "blocked while offline",
+    description: `${offline.blocked.filter((b) => b.fromServiceWorker).length} service-worker and ${offline.blocked.filter((b) => !b.fromServiceWorker).length} page requests`,
+  });
+
   // Back in range: the outbox drains by itself and the server's verdict comes back.
-  await context.setOffline(false);
+  await offline.backOnline();
   await expect(tech.outboxSummary()).toContainText("7 of 7 sent", { timeout: 30_000 });
+  // Every record the phone made is on the server exactly once, nothing else, and one photo.
+  await expect
+    .poll(async () => (await serverRecordsOf(entryId)).ids)
+    .toEqual([...before.ids, ...phoneIds].sort());
+  expect((await serverRecordsOf(entryId)).uploads).toBe(before.uploads + 1);
   await expect(page.getByTestId("server-verdict")).toHaveAttribute("data-status", "held");
   await expect(page.getByTestId("server-verdict-reason")).toContainText(/battery/i);
 
@@ -188,7 +208,7 @@ test("the prepared tech line opens with no signal after the browser is closed an
 
   // Reopened in the pit: no signal from the first request.
   context = await open();
-  await context.setOffline(true);
+  await takeOffline(context, baseURL ?? "");
   page = context.pages()[0] ?? (await context.newPage());
   await page.goto(techUrl);
   await expect(page.getByRole("heading", { name: "Scrutineering" })).toBeVisible();
