@@ -2,11 +2,13 @@
  * A pass QR, drawn on the server as SVG markup and placed inline, so the page shows it with no
  * request of its own (it keeps working offline once the page has loaded). The markup comes only
  * from the qrcode package's SVG renderer fed with our own URL, never from user text.
+ * It fills the width it is given (no frame or padding: the 4-module quiet zone is white inside the
+ * SVG) and is never taller than the screen, so a phone on its side still shows all of it.
  */
 export function PassQr({ svg, url, label }: { svg: string; url: string; label: string }) {
   return (
     <figure
-      className="mx-auto w-full max-w-md rounded-xl border-2 border-asphalt-950 bg-white p-2"
+      className="mx-auto w-full max-w-[100dvh] bg-white"
       data-testid="pass-qr"
       data-pass-url={url}
     >

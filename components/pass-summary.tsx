@@ -1,7 +1,10 @@
+import type { ClassMove } from "@/lib/entries/class-move";
 import { formatEventDay } from "@/lib/passes/format-event-day";
+import { ClassLine } from "./class-line";
 
-/** The car number and class of a pass, big enough to read from arm's length. */
-export function PassCarLine({ carNumber, className }: { carNumber: number; className: string }) {
+/** The car number and class of a pass, big enough to read from arm's length; where the verdict
+ *  moved the car up, the class it declared and the class it runs in. */
+export function PassCarLine({ carNumber, move }: { carNumber: number; move: ClassMove }) {
   return (
     <div className="flex items-center gap-4">
       <span
@@ -10,9 +13,8 @@ export function PassCarLine({ carNumber, className }: { carNumber: number; class
       >
         {carNumber}
       </span>
-      <div className="min-w-0">
-        <p className="text-base font-semibold uppercase tracking-wider text-asphalt-700">Class</p>
-        <p className="text-3xl font-bold break-words">{className}</p>
+      <div className="min-w-0 break-words">
+        <ClassLine move={move} size="pass" />
       </div>
     </div>
   );

@@ -3,9 +3,10 @@ import { and, eq, sql } from "drizzle-orm";
 import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import type { PassReadiness } from "../../lib/passes/pass-blockers";
 import { getDb } from "../client";
-import { entries, events, payments, ruleSetVersions, venues, waivers } from "../schema";
+import { entries, events, payments, ruleSetVersions, venues, verdicts, waivers } from "../schema";
 
-/** An entry with what its pass shows and what decides whether it may have one, or null. */
+/** An entry with what its pass shows (car number, declared class, and the class the stored
+ *  verdict runs it in) and what decides whether it may have one, or null. */
 export async function getEntryForPass({ entryId }: { entryId: string }) {
   const db = getDb();
   const [row] = await db
@@ -20,11 +21,17 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
       timeZone: events.timeZone,
       venueName: venues.name,
       ruleSetBody: ruleSetVersions.body,
+      verdictStatus: verdicts.status,
+      finalClass: verdicts.finalClass,
     })
     .from(entries)
     .innerJoin(events, eq(events.id, entries.eventId))
     .innerJoin(venues, eq(venues.id, events.venueId))
     .innerJoin(ruleSetVersions, eq(ruleSetVersions.id, events.ruleSetVersionId))
+    .leftJoin(
+      verdicts,
+      and(eq(verdicts.eventId, entries.eventId), eq(verdicts.entryId, entries.id)),
+    )
     .where(eq(entries.id, entryId))
     .limit(1);
   if (!row) return null;
@@ -47,7 +54,7 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
         ),
       ),
   ]);
-  const { ruleSetBody, ...rest } = row;
+  const { ruleSetBody, verdictStatus, ...rest } = row;
   const waiverState: PassReadiness["waiver"] =
     Number(waiver?.complete ?? 0) > 0
       ? "signed"
@@ -56,6 +63,7 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
         : "missing";
   return {
     ...rest,
+    verdictStatus: verdictStatus ?? "waiting",
     classNames: classNamesFromRuleSet(ruleSetBody),
     waiver: waiverState,
     paid: Number(payment?.paid ?? 0) > 0,

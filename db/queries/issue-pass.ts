@@ -4,7 +4,7 @@ import { v7 as uuidv7 } from "uuid";
 import { AppError } from "../../lib/errors";
 import { parseCompactJws } from "../../lib/passes/parse-compact-jws";
 import { passBlockers } from "../../lib/passes/pass-blockers";
-import { type PassClaims, passClaimsSchema, passIssuer } from "../../lib/passes/pass-claims-schema";
+import { type PassClaims, passPayloadSchema } from "../../lib/passes/pass-claims-schema";
 import { passValidityWindow } from "../../lib/passes/pass-expiry";
 import { signPass } from "../../lib/passes/sign-pass";
 import { getDb } from "../client";
@@ -21,13 +21,14 @@ export type IssuedPass = {
   reused: boolean;
 };
 
-/** The claims inside a token we stored ourselves; null if it somehow does not read. */
+/** The claims inside a token we stored ourselves; null if it does not read (such as a pass in an
+ *  older layout, which is then superseded like any other). */
 function storedClaims(token: string): PassClaims | null {
   const parsed = parseCompactJws(token);
   if (!parsed.ok) return null;
   try {
     const json: unknown = JSON.parse(new TextDecoder().decode(parsed.jws.payload));
-    const claims = passClaimsSchema.safeParse(json);
+    const claims = passPayloadSchema.safeParse(json);
     return claims.success ? claims.data : null;
   } catch {
     return null;
@@ -36,7 +37,7 @@ function storedClaims(token: string): PassClaims | null {
 
 /**
  * The entry's pass: its current one (not revoked, not expired, signed with a key still trusted,
- * and still naming the entry's car number, class and expiry) or a newly signed one. A current
+ * and still naming the entry's car number and expiry) or a newly signed one. A current
  * pass whose details no longer match the entry is revoked as superseded in the same transaction,
  * so an old car number cannot keep verifying. The entry's row is locked meanwhile, so two page
  * loads at once make one pass, not two. Refuses (409) while the entry may not have a pass.
@@ -65,7 +66,7 @@ export async function issuePass({
 
   return getDb().transaction(async (tx) => {
     const [locked] = await tx
-      .select({ carNumber: entries.carNumber, declaredClass: entries.declaredClass })
+      .select({ carNumber: entries.carNumber })
       .from(entries)
       .where(eq(entries.id, entryId))
       .for("update");
@@ -91,12 +92,11 @@ export async function issuePass({
         claims &&
         claims.evt === entry.eventId &&
         claims.car === locked.carNumber &&
-        claims.cls === locked.declaredClass &&
         claims.exp === window.exp
       ) {
         return { passId: row.id, token: row.token, claims, reused: true };
       }
-      const reason = "Superseded: the entry's car number, class or date changed.";
+      const reason = "Superseded: the entry's car number or date changed, or the pass layout did.";
       await tx
         .update(passes)
         .set({ revokedAt: now, revokedReason: reason, revokedBy: actorId })
@@ -114,11 +114,9 @@ export async function issuePass({
 
     const passId = uuidv7();
     const claims: PassClaims = {
-      iss: passIssuer,
       evt: entry.eventId,
       ent: entryId,
       car: locked.carNumber,
-      cls: locked.declaredClass,
       iat: window.iat,
       exp: window.exp,
       jti: passId,

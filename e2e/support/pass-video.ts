@@ -2,6 +2,7 @@ import { execFileSync } from "node:child_process";
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import QRCode from "qrcode";
+import { passQrOptions } from "../../lib/passes/pass-qr-svg";
 
 /**
  * A one-frame Y4M "camera" showing a pass QR, for Chromium's fake video capture (made during the
@@ -12,7 +13,8 @@ export async function makePassVideo(url: string, name: string): Promise<string> 
   mkdirSync(dir, { recursive: true });
   const png = path.join(dir, `${name}.png`);
   const y4m = path.join(dir, `${name}.y4m`);
-  await QRCode.toFile(png, url, { errorCorrectionLevel: "H", width: 400, margin: 4 });
+  // Drawn as the pass page draws it (same error correction and quiet zone).
+  await QRCode.toFile(png, url, { ...passQrOptions, width: 400 });
   execFileSync("ffmpeg", [
     "-loglevel",
     "error",

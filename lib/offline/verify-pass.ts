@@ -1,5 +1,5 @@
 import { parseCompactJws } from "../passes/parse-compact-jws";
-import { type PassClaims, passClaimsSchema, passHeaderSchema } from "../passes/pass-claims-schema";
+import { type PassClaims, passHeaderSchema, passPayloadSchema } from "../passes/pass-claims-schema";
 import type { PassPublicKey } from "../passes/pass-public-key-schema";
 import { verifyEd25519JwsSignature } from "../passes/verify-ed25519-jws-signature";
 
@@ -97,7 +97,7 @@ export async function verifyPass({
   if (!key) {
     // Most often a pass from another event (its key is not in this event's pack). The payload is
     // unverified here, so it can only pick which refusal to show, never turn one into a pass.
-    const unverified = passClaimsSchema.safeParse(readJson(jws.payload));
+    const unverified = passPayloadSchema.safeParse(readJson(jws.payload));
     if (unverified.success && unverified.data.evt !== eventId) {
       return refuse("other-event", { detail: "unknown key; payload names another event" });
     }
@@ -111,7 +111,7 @@ export async function verifyPass({
   });
   if (!signed) return refuse("bad-signature");
 
-  const claims = passClaimsSchema.safeParse(readJson(jws.payload));
+  const claims = passPayloadSchema.safeParse(readJson(jws.payload));
   if (!claims.success) return refuse("malformed", { detail: "payload is not pass claims" });
   const c = claims.data;
 
@@ -119,7 +119,7 @@ export async function verifyPass({
   if (revokedPassIds.includes(c.jti)) return refuse("revoked", { claims: c });
   const nowSeconds = Math.floor(now.getTime() / 1000);
   if (nowSeconds >= c.exp) return refuse("expired", { claims: c });
-  if (nowSeconds + clockToleranceSeconds < (c.nbf ?? c.iat)) {
+  if (nowSeconds + clockToleranceSeconds < c.iat) {
     return refuse("not-yet-valid", { claims: c });
   }
   return { ok: true, claims: c };

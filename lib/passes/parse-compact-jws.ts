@@ -1,6 +1,6 @@
 import { decodeBase64Url } from "./decode-base64url";
 
-/** Longest compact JWS we look at, in characters. A pass is about 500; this is generous, and
+/** Longest compact JWS we look at, in characters. A pass is about 350; this is generous, and
  *  stops a pasted novel from being decoded on a phone. */
 export const maxCompactJwsLength = 4096;
 

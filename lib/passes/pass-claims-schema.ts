@@ -1,11 +1,10 @@
 import { z } from "zod";
+import { base64UrlToUuid } from "./base64url-to-uuid";
 
-/** The JWS `typ` of a Plumbline pass (RFC 7515 §4.1.9; RFC 8725 §3.11 explicit typing), so a
- *  token signed for some other purpose can never be taken for a pass. */
-export const passTokenType = "plumbline-pass+jwt";
-
-/** The `iss` of every pass. */
-export const passIssuer = "plumbline";
+/** The JWS `typ` of a Plumbline pass (RFC 7515 §4.1.9, where the "application/" prefix may be
+ *  left out; RFC 8725 §3.11 explicit typing), so a token signed for some other purpose can never
+ *  be taken for a pass. Short because every character is in the QR. */
+export const passTokenType = "plpass+jwt";
 
 /** A NumericDate (RFC 7519 §2): whole seconds since 1970-01-01T00:00:00Z. We only ever issue
  *  whole seconds, so anything else did not come from us. */
@@ -16,6 +15,14 @@ const numericDateSeconds = z
   .max(253_402_300_799, "A pass time must be before the year 10000");
 
 const id = z.uuid({ message: "Not a valid id" });
+
+/** An id as a pass carries it: the UUID's 16 bytes in 22 base64url characters, read back into
+ *  the UUID's text form. Only the canonical encoding is accepted. */
+const compactId = z
+  .string()
+  .length(22, "A pass id is 22 base64url characters")
+  .refine((text) => base64UrlToUuid(text) !== null, "Not a valid id")
+  .transform((text) => base64UrlToUuid(text) ?? "");
 
 /**
  * The protected header of a pass (RFC 7515 §4; alg "EdDSA" per RFC 8037 §3.1). Strict: we issue
@@ -30,35 +37,54 @@ export const passHeaderSchema = z.strictObject({
 
 export type PassHeader = z.infer<typeof passHeaderSchema>;
 
+const carNumber = z.number().int().min(0).max(9999);
+
 /**
- * The payload of a pass: which event, which entry, the car number and declared class the car
- * was entered with, and the window in which the pass is good. It identifies an entry; it says
- * nothing about whether the car is safe or legal.
+ * A pass as the code uses it: which event, which entry, the car number on the entry, when it was
+ * issued and until when it is good, and its own id. It identifies an entry; it says nothing about
+ * the car's class, whether it is safe or legal, or whether it may run.
  */
 export const passClaimsSchema = z
   .object({
-    iss: z.literal(passIssuer),
     /** Event id. */
     evt: id,
     /** Entry id. */
     ent: id,
     /** Car number on the entry. */
-    car: z.number().int().min(0).max(9999),
-    /** Declared class id from the event's rule set. */
-    cls: z.string().min(1).max(40),
-    /** Issued at, NumericDate seconds. */
+    car: carNumber,
+    /** Issued at, NumericDate seconds; the pass is good from then. */
     iat: numericDateSeconds,
-    /** Not before, NumericDate seconds (absent: valid from `iat`). */
-    nbf: numericDateSeconds.optional(),
     /** Expires at, NumericDate seconds. */
     exp: numericDateSeconds,
     /** Pass id: what a revocation names. */
     jti: id,
   })
-  .refine((c) => c.exp > c.iat, { message: "A pass must expire after it is issued", path: ["exp"] })
-  .refine((c) => c.nbf === undefined || c.nbf < c.exp, {
-    message: "A pass must start before it expires",
-    path: ["nbf"],
+  .refine((c) => c.exp > c.iat, {
+    message: "A pass must expire after it is issued",
+    path: ["exp"],
   });
 
 export type PassClaims = z.infer<typeof passClaimsSchema>;
+
+/**
+ * The JWS payload of a pass (a JWT claims set, RFC 7519), as compact as it can be while staying
+ * plain JSON: the same members as PassClaims, with the three ids as 22-character base64url. The
+ * issuer and class are not carried: the key (`kid`) says who signed it, and the entry says its
+ * class. Parsing gives PassClaims back, with the ids in their UUID text form.
+ */
+export const passPayloadSchema = z
+  .object({
+    evt: compactId,
+    ent: compactId,
+    car: carNumber,
+    iat: numericDateSeconds,
+    exp: numericDateSeconds,
+    jti: compactId,
+  })
+  .refine((c) => c.exp > c.iat, {
+    message: "A pass must expire after it is issued",
+    path: ["exp"],
+  });
+
+/** The payload exactly as it is signed (ids compact). */
+export type PassPayload = z.input<typeof passPayloadSchema>;

@@ -2,10 +2,12 @@ import "server-only";
 import { createPrivateKey } from "node:crypto";
 import { type PassClaims, passClaimsSchema, passTokenType } from "./pass-claims-schema";
 import { signCompactJws } from "./sign-compact-jws";
+import { toPassPayload } from "./to-pass-payload";
 
 /**
  * Sign a pass: the claims (checked against the pass schema first, so we never issue a pass our
- * own verifier would call malformed) under the header `{ alg: "EdDSA", kid, typ }`.
+ * own verifier would call malformed), written compactly (`toPassPayload`), under the header
+ * `{ alg: "EdDSA", kid, typ }`.
  * @param privateKeyPkcs8 the event's private key, PKCS #8 DER in base64 (as event_pass_keys holds it)
  */
 export function signPass({
@@ -25,7 +27,7 @@ export function signPass({
   });
   return signCompactJws({
     protectedHeader: { alg: "EdDSA", kid, typ: passTokenType },
-    payload: new TextEncoder().encode(JSON.stringify(checked)),
+    payload: new TextEncoder().encode(JSON.stringify(toPassPayload(checked))),
     privateKey,
   });
 }

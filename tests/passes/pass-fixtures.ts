@@ -14,11 +14,9 @@ export const issuedAtSeconds = Date.UTC(2027, 3, 17, 8) / 1000;
 
 export function claimsFor(overrides: Partial<PassClaims> = {}): PassClaims {
   return {
-    iss: "plumbline",
     evt: eventId,
     ent: entryId,
     car: 7,
-    cls: "kestrel",
     iat: issuedAtSeconds,
     exp: issuedAtSeconds + 20 * 3600,
     jti: passId,

@@ -87,6 +87,41 @@ describe("the entrant's pass page", () => {
     expect(page.html).toContain("not a clearance");
   });
 
+  it("says where a moved-up car runs: the declared class and the class the verdict moved it to", async () => {
+    const moved = await entryWhere(
+      "e.co_driver_id is null and exists (select 1 from verdicts v where v.entry_id = e.id and v.status = 'moved-up' and v.final_class <> e.declared_class) and exists (select 1 from payments p where p.entry_id = e.id and p.status = 'paid') and exists (select 1 from waivers w where w.entry_id = e.id and w.is_minor = 0)",
+    );
+    const [classes] = await queryTestDb<{ declared: string; final: string }>(
+      databaseUrl,
+      "select e.declared_class as declared, v.final_class as final from entries e join verdicts v on v.entry_id = e.id where e.id = ?",
+      [moved.id],
+    );
+    const page = await openPass(await signedIn(moved.email), moved.id);
+    expect(page.status).toBe(200);
+    const line = /data-testid="class-line"[^>]*>(.*?)<\/p>/s.exec(page.html)?.[1] ?? "";
+    const text = line.replace(/<[^>]+>/g, "").replace(/<!-- -->/g, "");
+    const [ruleSet] = await queryTestDb<{
+      body: string | { classes: { id: string; name: string }[] };
+    }>(
+      databaseUrl,
+      "select v.body from events e join rule_set_versions v on v.id = e.rule_set_version_id where e.id = ?",
+      [eventId],
+    );
+    const body: { classes: { id: string; name: string }[] } =
+      typeof ruleSet?.body === "string"
+        ? JSON.parse(ruleSet.body)
+        : (ruleSet?.body ?? { classes: [] });
+    const name = (id = "") => body.classes.find((c) => c.id === id)?.name;
+    expect(text).toBe(
+      `Declared ${name(classes?.declared)} → runs in ${name(classes?.final)} (moved up)`,
+    );
+    // The pass itself still names only the entry: no class in the signed claims.
+    const payload = JSON.parse(
+      Buffer.from((page.token ?? "").split(".")[1] ?? "", "base64url").toString("utf8"),
+    );
+    expect(payload).not.toHaveProperty("cls");
+  });
+
   it("gives the co-driver the same pass (the entry's current pass is reused)", async () => {
     const first = await openPass(await signedIn(demo.entrant), own.id);
     const codriver = await openPass(await signedIn(demo.codriver), own.id);
@@ -167,9 +202,14 @@ describe("/p/<token>, what a phone camera opens", () => {
   it("refuses a revoked pass; the event pack lists it; the entrant gets a fresh one", async () => {
     const entrant = await signedIn(demo.entrant);
     const { token } = await openPass(entrant, own.id);
-    const passId = JSON.parse(
+    // The pass carries its id as the UUID's 16 bytes in base64url (22 characters).
+    const { base64UrlToUuid } = await import("../../lib/passes/base64url-to-uuid");
+    const compactJti = JSON.parse(
       Buffer.from((token ?? "").split(".")[1] ?? "", "base64url").toString("utf8"),
     ).jti as string;
+    expect(compactJti).toHaveLength(22);
+    const passId = base64UrlToUuid(compactJti) ?? "";
+    expect(passId).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
     const [organizer] = await queryTestDb<{ id: string }>(
       databaseUrl,
       "select id from users where email = ?",

@@ -118,11 +118,9 @@ describe("RFC 8037 Appendix A, through Plumbline's pass code", () => {
     const der = rfcPrivateKey.export({ type: "pkcs8", format: "der" }).toString("base64");
     const eventId = "01890a5d-ac96-774b-bcce-b302099a8057";
     const claims = {
-      iss: "plumbline" as const,
       evt: eventId,
       ent: "01890a5d-ac96-774b-bcce-b302099a8058",
       car: 7,
-      cls: "kestrel",
       iat: 1_800_000_000,
       exp: 1_800_086_400,
       jti: "01890a5d-ac96-774b-bcce-b302099a8059",

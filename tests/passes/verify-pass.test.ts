@@ -4,6 +4,8 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { type VerifyPassResult, verifyPass } from "@/lib/offline/verify-pass";
 import { decodeBase64Url } from "@/lib/passes/decode-base64url";
 import { encodeBase64Url } from "@/lib/passes/encode-base64url";
+import { passTokenType } from "@/lib/passes/pass-claims-schema";
+import { toPassPayload } from "@/lib/passes/to-pass-payload";
 import {
   at,
   claimsFor,
@@ -56,14 +58,14 @@ describe("verifyPass", () => {
     expect(r.ok ? null : r.claims).toBeUndefined();
   });
 
-  it("refuses altered claims (car number, class, expiry, event) under the original signature", async () => {
+  it("refuses altered claims (car number, expiry, entry, event) under the original signature", async () => {
     for (const change of [
       { car: 8 },
-      { cls: "peregrine" },
       { exp: claimsFor().exp + 86_400 },
       { ent: "0193a4b2-1c00-7000-8000-0000000000e2" },
+      { evt: otherEventId },
     ]) {
-      const altered = withPart(good, 1, claimsFor(change));
+      const altered = withPart(good, 1, toPassPayload(claimsFor(change)));
       expect(codeOf(await check(altered)), JSON.stringify(change)).toBe("bad-signature");
     }
   });
@@ -78,7 +80,7 @@ describe("verifyPass", () => {
   });
 
   it("refuses a pass that is not valid yet, allowing a slow clock 5 minutes", async () => {
-    const later = key.sign(claimsFor({ nbf: issuedAtSeconds + 7200 }));
+    const later = key.sign(claimsFor({ iat: issuedAtSeconds + 7200 }));
     expect(codeOf(await check(later, { now: at(issuedAtSeconds + 3600) }))).toBe("not-yet-valid");
     expect(codeOf(await check(later, { now: at(issuedAtSeconds + 7200 - 300) }))).toBe("ok");
     expect(codeOf(await check(good, { now: at(issuedAtSeconds - 301) }))).toBe("not-yet-valid");
@@ -145,14 +147,15 @@ describe("verifyPass", () => {
   });
 
   it("refuses headers that are not exactly a pass header", async () => {
-    const header = { alg: "EdDSA", kid: key.kid, typ: "plumbline-pass+jwt" };
+    const header = { alg: "EdDSA", kid: key.kid, typ: passTokenType };
     for (const bad of [
       { ...header, alg: "none" },
       { ...header, alg: "HS256" },
       { ...header, alg: "ES256" },
       { ...header, typ: "JWT" },
+      { ...header, typ: "plumbline-pass+jwt" },
       { alg: "EdDSA", kid: key.kid },
-      { alg: "EdDSA", typ: "plumbline-pass+jwt" },
+      { alg: "EdDSA", typ: passTokenType },
       { ...header, crit: ["exp"] },
       { ...header, jwk: { kty: "OKP", crv: "Ed25519", x: key.publicKeyX } },
     ]) {
@@ -177,13 +180,19 @@ describe("verifyPass", () => {
       format: "der",
       type: "pkcs8",
     });
-    const header = { alg: "EdDSA", kid: key.kid, typ: "plumbline-pass+jwt" };
+    const header = { alg: "EdDSA", kid: key.kid, typ: passTokenType };
+    const payload0 = toPassPayload(claimsFor());
     for (const payload of [
       "hello",
-      JSON.stringify({ ...claimsFor(), car: "7" }),
-      JSON.stringify({ ...claimsFor(), iss: "someone-else" }),
-      JSON.stringify({ ...claimsFor(), exp: claimsFor().iat }),
-      JSON.stringify({ ...claimsFor(), iat: 1.5 }),
+      JSON.stringify({ ...payload0, car: "7" }),
+      JSON.stringify({ ...payload0, exp: payload0.iat }),
+      JSON.stringify({ ...payload0, iat: 1.5 }),
+      // The ids in their 36-character text form: the old, longer layout is not a pass any more.
+      JSON.stringify(claimsFor()),
+      // 22 characters whose unused trailing bits are not zero: not the canonical form of an id.
+      JSON.stringify({ ...payload0, ent: `${payload0.ent.slice(0, 21)}B` }),
+      JSON.stringify({ ...payload0, jti: payload0.jti.slice(0, 21) }),
+      JSON.stringify({ ...payload0, evt: undefined }),
     ]) {
       const token = signCompactJws({
         protectedHeader: header,
@@ -221,6 +230,9 @@ describe("the browser's pass code", () => {
       "lib/passes/decode-base64url.ts",
       "lib/passes/encode-base64url.ts",
       "lib/passes/pass-claims-schema.ts",
+      "lib/passes/base64url-to-uuid.ts",
+      "lib/passes/uuid-to-base64url.ts",
+      "lib/passes/to-pass-payload.ts",
       "lib/passes/pass-public-key-schema.ts",
       "lib/passes/verify-ed25519-jws-signature.ts",
       "lib/passes/pass-url.ts",

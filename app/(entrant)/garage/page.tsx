@@ -3,9 +3,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AddCarForm } from "@/components/add-car-form";
 import { CarList } from "@/components/car-list";
+import { ClassLine } from "@/components/class-line";
 import { VerdictBadge } from "@/components/verdict-badge";
 import { listGarage } from "@/db/queries/list-garage";
 import { requirePageUser } from "@/lib/auth/require-page-permission";
+import { classMove } from "@/lib/entries/class-move";
+import { formatEventDay } from "@/lib/passes/format-event-day";
 import { garageKeys } from "@/lib/query/garage-queries";
 import { getQueryClient } from "@/lib/query/get-query-client";
 
@@ -29,39 +32,46 @@ export default async function GaragePage() {
         ) : (
           <ul className="space-y-2" data-testid="entrant-entries">
             {garage.entries.map((e) => (
-              <li
-                key={e.entryId}
-                className="card flex flex-wrap items-center justify-between gap-3"
-              >
-                <div className="flex items-center gap-3">
-                  <span className="tabular rounded-md bg-asphalt-950 px-2 py-1 text-2xl font-bold text-asphalt-50">
+              <li key={e.entryId} className="card space-y-3" data-testid="entrant-entry">
+                <div className="flex items-start gap-3">
+                  <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 py-1 text-center text-2xl font-bold text-asphalt-50">
                     {e.carNumber}
                   </span>
-                  <div>
+                  <div className="min-w-0">
                     <p className="text-lg font-semibold">{e.eventName}</p>
                     <p className="text-base text-asphalt-800">
-                      {e.eventDate} · {e.make} {e.model} · {e.declaredClass}
+                      <time dateTime={e.eventDate}>{formatEventDay(e.eventDate)}</time> · {e.make}{" "}
+                      {e.model}
                     </p>
+                    <ClassLine
+                      move={classMove({
+                        declaredClass: e.declaredClass,
+                        finalClass: e.finalClass,
+                        status: e.status,
+                      })}
+                    />
                   </div>
                 </div>
-                <div className="flex items-center gap-3">
+                <div className="flex flex-wrap items-center gap-3">
                   <VerdictBadge status={e.status} toClass={e.finalClass} />
-                  <Link
-                    href={`/entries/${e.entryId}`}
-                    className="btn-secondary min-w-touch"
-                    data-testid="entry-result-link"
-                    aria-label={`Result for car ${e.carNumber}, ${e.eventName}`}
-                  >
-                    Result
-                  </Link>
-                  <Link
-                    href={`/entries/${e.entryId}/pass`}
-                    className="btn-secondary min-w-touch"
-                    data-testid="entry-pass-link"
-                    aria-label={`Pass for car ${e.carNumber}, ${e.eventName}`}
-                  >
-                    Pass
-                  </Link>
+                  <div className="ml-auto flex gap-2">
+                    <Link
+                      href={`/entries/${e.entryId}`}
+                      className="btn-secondary min-w-touch"
+                      data-testid="entry-result-link"
+                      aria-label={`Result for car ${e.carNumber}, ${e.eventName}`}
+                    >
+                      Result
+                    </Link>
+                    <Link
+                      href={`/entries/${e.entryId}/pass`}
+                      className="btn-secondary min-w-touch"
+                      data-testid="entry-pass-link"
+                      aria-label={`Pass for car ${e.carNumber}, ${e.eventName}`}
+                    >
+                      Pass
+                    </Link>
+                  </div>
                 </div>
               </li>
             ))}

@@ -9,6 +9,7 @@ import { getEventRoles } from "@/db/queries/get-event-roles";
 import { getSessionUser } from "@/lib/auth/get-session-user";
 import { can } from "@/lib/auth/permissions";
 import { formatPassTime } from "@/lib/passes/format-pass-time";
+import { passClassMove } from "@/lib/passes/pass-class-move";
 import { extractPassToken } from "@/lib/passes/pass-url";
 import { verifyPassOnServer } from "@/lib/passes/verify-pass-on-server";
 import { revokePassAction } from "./actions";
@@ -38,10 +39,7 @@ export default async function PassCheckPage({ params }: { params: Promise<{ toke
       <PassState valid={result.ok} message={result.ok ? undefined : result.message} />
       {claims ? (
         <section className="card space-y-4">
-          <PassCarLine
-            carNumber={claims.car}
-            className={entry?.classNames[claims.cls] ?? claims.cls}
-          />
+          {entry ? <PassCarLine carNumber={claims.car} move={passClassMove(entry)} /> : null}
           <PassFacts
             eventName={entry?.eventName ?? null}
             eventDate={entry?.eventDate ?? null}

@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Caution } from "@/components/caution";
+import { ClassLine } from "@/components/class-line";
 import { AttentionIcon } from "@/components/icons/state-icons";
 import { PassQr } from "@/components/pass-qr";
 import { PassCarLine, PassFacts } from "@/components/pass-summary";
 import { formatPassTime } from "@/lib/passes/format-pass-time";
 import { loadOwnPassPage } from "@/lib/passes/load-own-pass-page";
+import { passClassMove } from "@/lib/passes/pass-class-move";
 
 export const metadata: Metadata = { title: "Your pass", robots: { index: false } };
 
@@ -17,7 +19,7 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
     entryId,
     returnTo: `/entries/${entryId}/pass`,
   });
-  const className = entry.classNames[entry.declaredClass] ?? entry.declaredClass;
+  const move = passClassMove(entry);
   return (
     <div className="mx-auto max-w-md space-y-5">
       <div>
@@ -32,15 +34,15 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
           <p className="text-center text-2xl font-bold" data-testid="pass-instruction">
             Show this at the tech line
           </p>
-          <PassCarLine
-            carNumber={pass.claims.car}
-            className={entry.classNames[pass.claims.cls] ?? pass.claims.cls}
-          />
-          <PassQr
-            svg={pass.qrSvg}
-            url={pass.url}
-            label={`Pass QR code for car ${pass.claims.car}`}
-          />
+          <PassCarLine carNumber={pass.claims.car} move={move} />
+          {/* Out to the screen's edges on a phone: the bigger the modules, the better it scans. */}
+          <div className="-mx-[calc(2rem+1px)] sm:-mx-[calc(1rem+1px)]">
+            <PassQr
+              svg={pass.qrSvg}
+              url={pass.url}
+              label={`Pass QR code for car ${pass.claims.car}`}
+            />
+          </div>
           <PassFacts
             eventName={entry.eventName}
             eventDate={entry.eventDate}
@@ -64,7 +66,7 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
                 <li key={b}>{b}</li>
               ))}
             </ul>
-            <p className="text-base">Class: {className}</p>
+            <ClassLine move={move} />
           </div>
         </section>
       )}
