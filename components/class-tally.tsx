@@ -1,11 +1,28 @@
-/** How many cars are in each class, as a row of chips ("Merlin: 15"). */
-export function ClassTally({ classNames, testId }: { classNames: string[]; testId?: string }) {
-  const counts = new Map<string, number>();
-  for (const name of classNames) counts.set(name, (counts.get(name) ?? 0) + 1);
+import { tallyByLadder } from "@/lib/entries/tally-by-ladder";
+
+/** How many cars are in each class, as a row of chips ("Merlin: 15") in ladder order, low → high. */
+export function ClassTally({
+  classNames,
+  ladder,
+  testId,
+}: {
+  classNames: string[];
+  /** The event's class names, lowest first (the rule set's order). */
+  ladder: string[];
+  testId?: string;
+}) {
   return (
-    <ul className="flex flex-wrap gap-2" data-testid={testId}>
-      {[...counts.entries()].map(([name, count]) => (
-        <li key={name} className="rounded-full border-2 border-asphalt-700 px-3 py-1 font-semibold">
+    <ul
+      className="flex flex-wrap gap-2"
+      data-testid={testId}
+      aria-label="Cars by class, low to high"
+    >
+      {tallyByLadder(classNames, ladder).map(({ name, count }) => (
+        <li
+          key={name}
+          className="rounded-full border-2 border-asphalt-700 px-3 py-1 font-semibold"
+          data-class-name={name}
+        >
           {name}: <span className="tabular">{count}</span>
         </li>
       ))}

@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import type { EntryListRow } from "@/lib/entries/to-entry-list-row";
+import { SignOnChip } from "./sign-on-chip";
 import { VerdictBadge } from "./verdict-badge";
 
 /** A searchable list of entries, car number first; rows link (`hrefTemplate`) or call `onSelect`. */
@@ -15,6 +16,7 @@ export function EntryList({
   /** Link each row: `:entryId` in the template is replaced by the row's entry id. */
   hrefTemplate?: string;
   onSelect?: (entryId: string) => void;
+  /** Said when there are no rows at all; a search that matches nothing says so instead. */
   emptyText?: string;
 }) {
   const [query, setQuery] = useState("");
@@ -35,7 +37,11 @@ export function EntryList({
       <p className="text-base text-asphalt-700" aria-live="polite">
         {shown.length} of {rows.length} cars
       </p>
-      {shown.length === 0 ? <p className="card">{emptyText}</p> : null}
+      {shown.length === 0 ? (
+        <p className="card" data-testid="entry-list-empty">
+          {rows.length > 0 && query.trim() ? `No car matches “${query.trim()}”.` : emptyText}
+        </p>
+      ) : null}
       <ul className="space-y-2">
         {shown.map((row) => {
           const body = (
@@ -59,6 +65,11 @@ export function EntryList({
                     </span>
                   ) : null}
                 </div>
+                {row.signOn ? (
+                  <div className="mt-1">
+                    <SignOnChip signOn={row.signOn} />
+                  </div>
+                ) : null}
                 {row.reason ? (
                   <p className="mt-1 text-base text-asphalt-800">{row.reason}</p>
                 ) : null}

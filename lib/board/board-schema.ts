@@ -1,6 +1,6 @@
 import type { VerdictWord } from "../verdict-word";
 
-/** One car on the public tech board: number, class and where it stands. No personal details. */
+/** One car on the public paddock board: number, class and where it stands. No personal details. */
 export type BoardCar = {
   carNumber: number;
   declaredClass: string;

@@ -1,4 +1,5 @@
 import type { VerdictWord } from "../verdict-word";
+import type { SignOnState } from "./sign-on-state";
 
 export type EntryListRow = {
   entryId: string;
@@ -10,6 +11,8 @@ export type EntryListRow = {
   status: VerdictWord;
   reason: string | null;
   needsChief: boolean;
+  /** Shown only where a page passes it (the clerk's list): whether the entry is signed on. */
+  signOn?: SignOnState;
 };
 
 type Source = {

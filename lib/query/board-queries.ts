@@ -7,7 +7,7 @@ export const boardKeys = {
   event: (eventId: string) => [...boardKeys.all, eventId] as const,
 };
 
-/** The tech board, refetched every 15 s and when the screen comes back into view. */
+/** The paddock board, refetched every 15 s and when the screen comes back into view. */
 export const boardQuery = (eventId: string) =>
   queryOptions({
     queryKey: boardKeys.event(eventId),

@@ -3,10 +3,12 @@ import Link from "next/link";
 import { ClassTally } from "@/components/class-tally";
 import { EventHeading } from "@/components/event-heading";
 import { StatusCounts } from "@/components/status-counts";
+import { getEventRuleSet } from "@/db/queries/get-event-rule-set";
 import { listEventEntries } from "@/db/queries/list-event-entries";
 import { listEventOfficials } from "@/db/queries/list-event-officials";
 import { loadEventPage } from "@/lib/auth/load-event-page";
 import { roleLabels } from "@/lib/auth/roles";
+import { eventStatusLabels } from "@/lib/events/event-status-label";
 import { formatMoney } from "@/lib/format-money";
 
 export const metadata: Metadata = { title: "Organizer" };
@@ -18,14 +20,16 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
     permission: "event.manage",
     returnTo: `/organizer/${eventId}`,
   });
-  const [entries, officials] = await Promise.all([
+  const [entries, officials, rules] = await Promise.all([
     listEventEntries({ eventId }),
     listEventOfficials({ eventId }),
+    getEventRuleSet({ eventId }),
   ]);
+  const ladder = rules?.ruleSet.classes.map((c) => c.name) ?? [];
   const facts: [string, string][] = [
     ["Club", event.clubName],
     ["Venue", `${event.venueName} (${(event.trackLengthM / 1000).toFixed(2)} km)`],
-    ["Status", event.status],
+    ["Event status", eventStatusLabels[event.status]],
     ["Entries", `${entries.length} of ${event.capacity}`],
     ["Entry fee", formatMoney(event.entryFeeMinor, event.currency)],
     ["Units on the tech line", event.unitSystem === "mm" ? "millimetres" : "inches"],
@@ -57,8 +61,12 @@ export default async function OrganizerPage({ params }: { params: Promise<{ even
         <StatusCounts rows={entries} />
       </section>
       <section className="space-y-2">
-        <h2 className="text-2xl font-bold">Entries by declared class</h2>
-        <ClassTally classNames={entries.map((row) => row.declaredClassName)} />
+        <h2 className="text-2xl font-bold">Entries by declared class, low to high</h2>
+        <ClassTally
+          classNames={entries.map((row) => row.declaredClassName)}
+          ladder={ladder}
+          testId="entries-by-class"
+        />
       </section>
       <section className="space-y-2">
         <h2 className="text-2xl font-bold">Officials</h2>

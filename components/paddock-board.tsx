@@ -6,8 +6,10 @@ import { type VerdictWord, verdictLabels } from "@/lib/verdict-word";
 
 const order: VerdictWord[] = ["cleared", "moved-up", "re-measure", "held", "waiting"];
 
-/** The tech board for everyone: cars grouped by verdict state, updating by itself. */
-export function TechBoard({ eventId }: { eventId: string }) {
+/** The paddock board for everyone: cars grouped by their state at the tech line, updating by
+ *  itself. Scrutineering only: it never says a car is ready to run (sign-on and the run sheet
+ *  decide that). */
+export function PaddockBoard({ eventId }: { eventId: string }) {
   const { data, isError, dataUpdatedAt } = useQuery(boardQuery(eventId));
   if (!data)
     return (
@@ -16,7 +18,7 @@ export function TechBoard({ eventId }: { eventId: string }) {
       </p>
     );
   return (
-    <div className="space-y-6" data-testid="tech-board">
+    <div className="space-y-6" data-testid="paddock-board">
       <p className="text-base text-asphalt-700" aria-live="polite">
         Updated{" "}
         {new Date(dataUpdatedAt).toLocaleTimeString("en-GB", {

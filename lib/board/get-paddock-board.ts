@@ -5,8 +5,8 @@ import { listEventEntries } from "../../db/queries/list-event-entries";
 import { AppError } from "../errors";
 import type { Board } from "./board-schema";
 
-/** The public tech board of an event: every car's number, class and verdict state. */
-export async function getTechBoard({
+/** The public paddock board of an event: every car's number, class and verdict state. */
+export async function getPaddockBoard({
   eventId,
   now,
 }: {
