@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { shortPersonName } from "@/lib/auth/short-person-name";
 import { PlumbMark } from "./icons/plumb-mark";
 
 export function SiteHeader({
@@ -19,9 +20,10 @@ export function SiteHeader({
           Plumbline
         </Link>
         {userName && signOutAction ? (
-          <form action={signOutAction} className="flex items-center gap-3">
-            <span className="hidden text-base sm:inline" data-testid="signed-in-as">
-              {userName}
+          <form action={signOutAction} className="flex min-w-0 items-center gap-3">
+            <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+              <span className="sm:hidden">{shortPersonName(userName)}</span>
+              <span className="hidden sm:inline">{userName}</span>
             </span>
             <button
               type="submit"
