@@ -17,11 +17,14 @@ export function PassScanner({
   const elementId = `scanner-${useId().replace(/:/g, "")}`;
   const [problem, setProblem] = useState<string | null>(null);
   const done = useRef(false);
+  // The latest callback, so a parent re-render never restarts the camera mid-scan.
+  const onTextRef = useRef(onText);
+  onTextRef.current = onText;
 
   useEffect(() => {
     let scanner: Scanner | null = null;
     let cancelled = false;
-    (async () => {
+    const starting = (async () => {
       const { Html5Qrcode, Html5QrcodeSupportedFormats } = await import("html5-qrcode");
       if (cancelled) return;
       const instance = new Html5Qrcode(elementId, {
@@ -38,7 +41,7 @@ export function PassScanner({
           (text) => {
             if (done.current) return;
             done.current = true;
-            onText(text);
+            onTextRef.current(text);
           },
           () => {},
         );
@@ -52,14 +55,17 @@ export function PassScanner({
     })();
     return () => {
       cancelled = true;
-      const s = scanner;
-      if (s?.isScanning)
-        void s
-          .stop()
-          .then(() => s.clear())
-          .catch(() => {});
+      // Stop once the camera has started (or failed to), never while it is still opening.
+      void starting.then(() => {
+        const s = scanner;
+        if (s?.isScanning)
+          void s
+            .stop()
+            .then(() => s.clear())
+            .catch(() => {});
+      });
     };
-  }, [elementId, onText]);
+  }, [elementId]);
 
   return (
     <div className="card space-y-3" data-testid="pass-scanner">
