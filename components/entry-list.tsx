@@ -1,6 +1,8 @@
 "use client";
 import Link from "next/link";
 import { useMemo, useState } from "react";
+import { CarAndDrivers } from "@/components/car-and-drivers";
+import { CarNumberChip } from "@/components/car-number-chip";
 import type { EntryListRow } from "@/lib/entries/to-entry-list-row";
 import { SignOnChip } from "./sign-on-chip";
 import { VerdictBadge } from "./verdict-badge";
@@ -46,17 +48,13 @@ export function EntryList({
         {shown.map((row) => {
           const body = (
             <div className="flex items-start gap-3">
-              <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 py-1 text-center text-2xl font-bold text-asphalt-50">
-                {row.carNumber}
-              </span>
+              <CarNumberChip carNumber={row.carNumber} />
               <div className="min-w-0 flex-1">
-                <div className="flex flex-wrap items-center gap-2">
-                  <span className="text-lg font-semibold">{row.car}</span>
-                  <span className="rounded border border-asphalt-400 px-2 text-base">
-                    {row.declaredClass}
-                  </span>
-                </div>
-                <p className="text-base text-asphalt-800">{row.drivers}</p>
+                <CarAndDrivers
+                  car={row.car}
+                  declaredClass={row.declaredClass}
+                  drivers={row.drivers}
+                />
                 <div className="mt-1 flex flex-wrap items-center gap-2">
                   <VerdictBadge status={row.status} toClass={row.finalClass} />
                   {row.needsChief ? (

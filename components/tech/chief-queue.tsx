@@ -1,4 +1,6 @@
 import Link from "next/link";
+import { CarAndDrivers } from "@/components/car-and-drivers";
+import { CarNumberChip } from "@/components/car-number-chip";
 import { AttentionIcon } from "@/components/icons/state-icons";
 import { VerdictBadge } from "@/components/verdict-badge";
 import type { ChiefQueueRow } from "@/lib/tech/load-chief-queue";
@@ -29,17 +31,13 @@ export function ChiefQueue({
             aria-label={`Car ${row.carNumber}, ${row.car}: open the car card`}
           >
             <div className="flex items-start gap-3">
-              <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 py-1 text-center text-2xl font-bold text-asphalt-50">
-                {row.carNumber}
-              </span>
+              <CarNumberChip carNumber={row.carNumber} />
               <div className="min-w-0 flex-1 space-y-1">
-                <div className="flex flex-wrap items-center gap-2">
-                  <span className="text-lg font-semibold">{row.car}</span>
-                  <span className="rounded border border-asphalt-400 px-2 text-base">
-                    {row.declaredClass}
-                  </span>
-                </div>
-                <p className="text-base text-asphalt-800">{row.drivers}</p>
+                <CarAndDrivers
+                  car={row.car}
+                  declaredClass={row.declaredClass}
+                  drivers={row.drivers}
+                />
                 <VerdictBadge status={row.status} toClass={row.finalClass} />
                 {row.attention.length > 0 ? (
                   <ul className="space-y-1" data-testid="chief-attention">

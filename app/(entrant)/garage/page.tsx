@@ -3,6 +3,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AddCarForm } from "@/components/add-car-form";
 import { CarList } from "@/components/car-list";
+import { CarNumberChip } from "@/components/car-number-chip";
 import { ClassLine } from "@/components/class-line";
 import { VerdictBadge } from "@/components/verdict-badge";
 import { listGarage } from "@/db/queries/list-garage";
@@ -34,9 +35,7 @@ export default async function GaragePage() {
             {garage.entries.map((e) => (
               <li key={e.entryId} className="card space-y-3" data-testid="entrant-entry">
                 <div className="flex items-start gap-3">
-                  <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 py-1 text-center text-2xl font-bold text-asphalt-50">
-                    {e.carNumber}
-                  </span>
+                  <CarNumberChip carNumber={e.carNumber} />
                   <div className="min-w-0">
                     <p className="text-lg font-semibold">{e.eventName}</p>
                     <p className="text-base text-asphalt-800">

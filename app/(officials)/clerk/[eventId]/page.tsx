@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { CarNumberChip } from "@/components/car-number-chip";
 import { ClassTally } from "@/components/class-tally";
 import { EntryList } from "@/components/entry-list";
 import { EventHeading } from "@/components/event-heading";
@@ -63,9 +64,7 @@ export default async function ClerkPage({ params }: { params: Promise<{ eventId:
                 className="flex flex-wrap items-center gap-x-3 gap-y-1 text-lg"
                 data-car-number={row.carNumber}
               >
-                <span className="tabular min-w-14 rounded-md bg-asphalt-950 px-2 text-center text-xl font-bold text-asphalt-50">
-                  {row.carNumber}
-                </span>
+                <CarNumberChip carNumber={row.carNumber} small />
                 <VerdictBadge status={row.status} toClass={row.finalClass} />
                 <span className="font-semibold">{row.signOn.missing.join("; ")}.</span>
               </li>
