@@ -11,6 +11,10 @@ require_node
 ensure_node_modules
 ensure_debian chromium chromium
 ensure_debian ffmpeg ffmpeg
+# A server this run starts, this run stops (a demo server that was already up stays up).
+if ! bash scripts/mariadb.sh status; then
+  trap 'bash scripts/mariadb.sh stop >/dev/null 2>&1 || true' EXIT
+fi
 bash scripts/mariadb.sh start
 export TZ=UTC NEXT_TELEMETRY_DISABLED=1
 export NEXT_DIST_DIR=.next-test
