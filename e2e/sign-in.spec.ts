@@ -91,15 +91,21 @@ test("an entrant cannot open a scrutineer page", async ({ page }) => {
   await expect(page.getByTestId("forbidden")).toBeVisible();
 });
 
-test("a signed-out visitor to the tech line is sent to sign in, then back", async ({ page }) => {
+test("a signed-out visitor to the tech line is sent to sign in, then back", async ({
+  page,
+  browser,
+  baseURL,
+}) => {
   await page.goto("/sign-in");
-  const signIn = new SignInPage(page);
-  await signIn.withPassword(demo.scrutineer, demo.password);
+  await new SignInPage(page).withPassword(demo.scrutineer, demo.password);
   await expect(page).toHaveURL(/\/tech\//);
   const techUrl = new URL(page.url()).pathname;
-  await page.context().clearCookies();
-  await page.goto(techUrl);
-  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=/);
-  await signIn.withPassword(demo.scrutineer, demo.password);
-  await expect(page).toHaveURL(new RegExp(`${techUrl}$`));
+  // A browser that never signed in (clearing cookies here would race the page's own requests,
+  // whose answers can set the session cookie again).
+  const visitor = await (await browser.newContext({ baseURL: baseURL ?? "" })).newPage();
+  await visitor.goto(techUrl);
+  await expect(visitor).toHaveURL(/\/sign-in\?callbackUrl=/);
+  await new SignInPage(visitor).withPassword(demo.scrutineer, demo.password);
+  await expect(visitor).toHaveURL(new RegExp(`${techUrl}$`));
+  await visitor.context().close();
 });

@@ -105,6 +105,9 @@ test("readings: a slip is caught before saving, and your own reading can be void
   await wingTop.getByRole("button", { name: "Save reading" }).click();
   await warning.getByRole("button", { name: "Save anyway" }).click();
   await expect(wingTop.getByRole("status")).toContainText("12.3 mm");
+  // Let the sync land first: the server's verdict then fills in above and moves the card down.
+  await expect(card.outboxSummary()).toContainText("2 of 2 sent", { timeout: 20_000 });
+  await expect(page.getByTestId("server-verdict")).not.toHaveAttribute("data-status", "none");
 
   // The typo is taken back with a reason; it stays listed, struck through.
   const typo = wingTop
