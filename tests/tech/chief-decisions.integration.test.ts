@@ -2,6 +2,7 @@ import { v7 as uuidv7 } from "uuid";
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
 import { techFixtures } from "../support/tech-fixtures";
 
@@ -43,11 +44,7 @@ function overrideRecord(entryId: string, payload: Record<string, unknown>, at = 
 }
 
 async function sync(records: unknown[]) {
-  const response = await chief.fetch(`/api/events/${fx.eventId}/sync`, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ deviceId: "chief-phone", records }),
-  });
+  const response = await postSync(chief, fx.eventId, "chief-phone", records);
   expect(response.status).toBe(200);
   return (await response.json()) as {
     results: { status: string }[];

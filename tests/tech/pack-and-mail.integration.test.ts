@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
 import { readingRecord, techFixtures } from "../support/tech-fixtures";
 
@@ -51,11 +52,7 @@ describe("GET /api/events/[eventId]/pack", () => {
       dimension: "wingChordMm",
       valueMm: 240,
     });
-    await scrutineer.fetch(`/api/events/${fx.eventId}/sync`, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ deviceId: "phone-p", records: [record] }),
-    });
+    await postSync(scrutineer, fx.eventId, "phone-p", [record]);
     const response = await scrutineer.fetch(
       `/api/events/${fx.eventId}/pack?since=${encodeURIComponent(first.recordsCursor ?? "")}`,
       { headers: { "if-none-match": first.etag } },
@@ -102,11 +99,7 @@ describe("results posted by e-mail", () => {
     );
     expect(before?.status ?? "waiting", "car 7 must not be held before this test").not.toBe("held");
     const since = Date.now() - 1000;
-    const response = await scrutineer.fetch(`/api/events/${fx.eventId}/sync`, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ deviceId: "phone-m", records: [record] }),
-    });
+    const response = await postSync(scrutineer, fx.eventId, "phone-m", [record]);
     expect(response.status).toBe(200);
     for (const to of [demo.entrant, demo.codriver]) {
       const { messages } = (await (await fetch(`${mailboxUrl}/messages?to=${to}`)).json()) as {

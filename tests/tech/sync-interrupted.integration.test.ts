@@ -1,6 +1,7 @@
 import { describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { postSync } from "../support/post-sync";
 import { startAppServer } from "../support/start-app-server";
 import { countRecords, readingRecord, techFixtures } from "../support/tech-fixtures";
 import { testServiceEnv } from "../support/test-env";
@@ -34,12 +35,7 @@ describe("a sync interrupted by the server stopping", () => {
     const doomed = await startAppServer({ port, env: testServiceEnv(databaseUrl, port) });
     const session = new HttpSession(doomed.url);
     await session.signInWithPassword(demo.scrutineer, demo.password);
-    const send = (s: HttpSession, batch: unknown[]) =>
-      s.fetch(`/api/events/${fx.eventId}/sync`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ deviceId: "phone-c", records: batch }),
-      });
+    const send = (s: HttpSession, batch: unknown[]) => postSync(s, fx.eventId, "phone-c", batch);
     const inFlight = batches.map((batch) =>
       send(session, batch).then(
         (r) => r.status,

@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, inject, it } from "vitest";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
 import { countRecords, readingRecord, techFixtures } from "../support/tech-fixtures";
 
@@ -23,11 +24,7 @@ let alexId: string;
 let entryId: string;
 
 async function sync(session: HttpSession, records: unknown[]) {
-  const response = await session.fetch(`/api/events/${fx.eventId}/sync`, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ deviceId: "test-device", records }),
-  });
+  const response = await postSync(session, fx.eventId, "test-device", records);
   return { status: response.status, body: (await response.json()) as SyncAnswer };
 }
 
