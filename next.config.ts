@@ -2,6 +2,12 @@ import withSerwistInit from "@serwist/next";
 import type { NextConfig } from "next";
 // Validate the environment once, when the app is built and when it starts.
 import { env } from "./lib/env";
+import { NON_PAGE_CSP, SERVICE_WORKER_CSP } from "./lib/http/content-security-policy";
+import { securityHeaders } from "./lib/http/security-headers";
+
+const https = env.APP_URL.startsWith("https:");
+const toList = (headers: Record<string, string>) =>
+  Object.entries(headers).map(([key, value]) => ({ key, value }));
 
 // The service worker (app/sw.ts) precaches the app shell; Serwist's plugin needs webpack builds.
 const withSerwist = withSerwistInit({
@@ -19,8 +25,27 @@ const nextConfig: NextConfig = {
   reactStrictMode: true,
   // `npm test` runs `tsc --noEmit` over the whole project before it builds; no need to do it twice.
   typescript: { ignoreBuildErrors: true },
-  experimental: { authInterrupts: true },
   serverExternalPackages: ["mysql2", "bcryptjs"],
+  // Server actions' bodies are capped per page by proxy.ts; this is Next's own backstop.
+  experimental: { authInterrupts: true, serverActions: { bodySizeLimit: "1mb" } },
+  // Pages get their CSP (with a nonce) from proxy.ts; everything else gets one here.
+  async headers() {
+    return [
+      { source: "/:path*", headers: toList(securityHeaders({ https })) },
+      {
+        source: "/api/:path*",
+        headers: [{ key: "Content-Security-Policy", value: NON_PAGE_CSP }],
+      },
+      {
+        source: "/sw.js",
+        headers: [{ key: "Content-Security-Policy", value: SERVICE_WORKER_CSP }],
+      },
+      {
+        source: "/swe-worker-:hash.js",
+        headers: [{ key: "Content-Security-Policy", value: SERVICE_WORKER_CSP }],
+      },
+    ];
+  },
 };
 
 export default withSerwist(nextConfig);

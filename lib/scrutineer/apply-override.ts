@@ -53,7 +53,7 @@ export function applyOverride(args: {
       : p.status === "cleared"
         ? `cleared in ${name}`
         : `moves up to ${name}`;
-  const reason = p.reason.trim().replace(/[.\s]+$/, "");
+  const reason = withoutTrailingStops(p.reason);
   return {
     status: p.status,
     classId: p.classId,
@@ -70,4 +70,12 @@ export function applyOverride(args: {
     },
     rejectedOverride: null,
   };
+}
+
+/** The reason without its closing full stops and spaces (a loop: a regex anchored at the end
+ * would retry from every space of a long run of them, quadratic in the length). */
+function withoutTrailingStops(text: string): string {
+  let end = text.length;
+  while (end > 0 && /[.\s]/.test(text.charAt(end - 1))) end -= 1;
+  return text.slice(0, end).trimStart();
 }

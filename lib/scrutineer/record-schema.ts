@@ -9,7 +9,28 @@ export const RECORD_TEXT_LIMITS = {
   standardName: 200,
   photoCaption: 500,
   note: 4000,
+  voidReason: 1000,
+  overrideReason: 2000,
 } as const;
+
+/**
+ * Longest identifying text a record carries, in characters: each fits the column or the key it
+ * ends up in (`records.device_id` is 64, `users.id` 255, an object key 300), so a long one is
+ * refused as that record's problem, never a database error for the whole batch.
+ */
+export const RECORD_KEY_LIMITS = {
+  deviceId: 64,
+  officialId: 255,
+  entryId: 64,
+  itemId: 64,
+  standardId: 64,
+  instrumentId: 64,
+  instrumentName: 120,
+  storageKey: 300,
+} as const;
+
+/** A required identifying text of at most `max` characters (the sync answer words the limit). */
+const key = (max: number) => z.string().min(1).max(max);
 
 /** Length dimensions a scrutineer reads, all in millimetres. */
 export const LENGTH_DIMENSIONS = [
@@ -42,8 +63,8 @@ export type Corner = (typeof CORNERS)[number];
 
 /** The tool a reading was taken with; its stated standard uncertainty is in the reading's unit. */
 export const instrumentSchema = z.object({
-  id: z.string().min(1),
-  name: z.string().min(1),
+  id: key(RECORD_KEY_LIMITS.instrumentId),
+  name: key(RECORD_KEY_LIMITS.instrumentName),
   /** Type B standard uncertainty u (not expanded), in the unit of the dimension. */
   standardUncertainty: z.number().positive().finite(),
 });
@@ -118,11 +139,11 @@ export type ReadingPayload = z.infer<typeof readingPayloadSchema>;
 
 /** A checklist answer for one safety item of the rule set. */
 export const checklistPayloadSchema = z.object({
-  itemId: z.string().min(1),
+  itemId: key(RECORD_KEY_LIMITS.itemId),
   result: z.enum(["pass", "fail", "not-applicable"]),
   equipment: z
     .object({
-      standardId: z.string().min(1),
+      standardId: key(RECORD_KEY_LIMITS.standardId),
       /** The standard's name as the scrutineer saw it, so a reason can name it even if a later
        * rule-set version no longer lists the id. */
       standardName: z.string().max(RECORD_TEXT_LIMITS.standardName).optional(),
@@ -138,8 +159,12 @@ export type ChecklistPayload = z.infer<typeof checklistPayloadSchema>;
 export const overridePayloadSchema = z
   .object({
     status: z.enum(["cleared", "moved-up", "held"]),
-    classId: z.string().min(1).nullable(),
-    reason: z.string().trim().min(5, "Write the reason for the override"),
+    classId: key(RECORD_KEY_LIMITS.itemId).nullable(),
+    reason: z
+      .string()
+      .max(RECORD_TEXT_LIMITS.overrideReason)
+      .trim()
+      .min(5, "Write the reason for the override"),
   })
   .superRefine((o, ctx) => {
     if (o.status === "held" && o.classId !== null) {
@@ -159,9 +184,9 @@ export type OverridePayload = z.infer<typeof overridePayloadSchema>;
 const base = {
   /** UUID v7 made on the device (time-ordered). */
   id: z.uuid({ version: "v7" }),
-  entryId: z.string().min(1),
-  officialId: z.string().min(1),
-  deviceId: z.string().min(1),
+  entryId: key(RECORD_KEY_LIMITS.entryId),
+  officialId: key(RECORD_KEY_LIMITS.officialId),
+  deviceId: key(RECORD_KEY_LIMITS.deviceId),
   /** The device's clock when the record was made, ISO 8601 with offset. */
   deviceTime: z.iso.datetime({ offset: true }),
 };
@@ -177,7 +202,7 @@ export const recordSchema = z.discriminatedUnion("kind", [
     ...base,
     kind: z.literal("photo"),
     payload: z.object({
-      storageKey: z.string().min(1),
+      storageKey: key(RECORD_KEY_LIMITS.storageKey),
       caption: z.string().max(RECORD_TEXT_LIMITS.photoCaption).optional(),
     }),
   }),
@@ -191,7 +216,11 @@ export const recordSchema = z.discriminatedUnion("kind", [
     kind: z.literal("void"),
     payload: z.object({
       targetRecordId: z.uuid({ version: "v7" }),
-      reason: z.string().trim().min(3, "Say why the record is void"),
+      reason: z
+        .string()
+        .max(RECORD_TEXT_LIMITS.voidReason)
+        .trim()
+        .min(3, "Say why the record is void"),
     }),
   }),
   z.object({ ...base, kind: z.literal("override"), payload: overridePayloadSchema }),

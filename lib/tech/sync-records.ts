@@ -1,4 +1,5 @@
 import "server-only";
+import { countEntryVoids } from "../../db/queries/count-entry-voids";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { insertRecords } from "../../db/queries/insert-records";
 import { listEventEntryIds } from "../../db/queries/list-event-entry-ids";
@@ -8,11 +9,19 @@ import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
 import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 import { describeRecordIssue } from "./describe-record-issue";
+import { deviceTimeProblem } from "./device-time-problem";
 import { notifyVerdictChanges } from "./notify-verdict-changes";
 import { recomputeVerdicts } from "./recompute-verdicts";
 import { recordRefusal } from "./record-refusal";
 import type { SyncRecordResult, SyncResponse } from "./sync-schema";
 import { toPackVerdict } from "./to-pack-verdict";
+
+/**
+ * Most voids one entry may carry. A car's record is corrected a handful of times on a day; a
+ * long chain of voids is a broken or hostile phone, and every one is read again by each
+ * evaluation of the entry.
+ */
+export const MAX_VOIDS_PER_ENTRY = 200;
 
 /**
  * Accept a batch from a phone's outbox: check every record on its own (shape, who made it, the
@@ -64,6 +73,11 @@ export async function syncRecords({
       return;
     }
     const record = result.data;
+    const lateClock = deviceTimeProblem(record.deviceTime, now);
+    if (lateClock !== null) {
+      results[index] = { id, status: "refused", reason: lateClock };
+      return;
+    }
     // A void's target: stored already, or accepted earlier in this batch (the outbox sends
     // oldest first, so a reading and the void of it can travel together).
     const target =
@@ -81,14 +95,35 @@ export async function syncRecords({
     eventId,
     entryIds: [...new Set(candidates.map((c) => c.record.entryId))],
   });
+  const voids = await countEntryVoids({
+    eventId,
+    entryIds: [
+      ...new Set(candidates.filter((c) => c.record.kind === "void").map((c) => c.record.entryId)),
+    ],
+  });
   const accepted = candidates.filter(({ index, record }) => {
-    if (known.has(record.entryId)) return true;
-    results[index] = {
-      id: record.id,
-      status: "refused",
-      reason: "That car is not entered in this event.",
-    };
-    return false;
+    if (!known.has(record.entryId)) {
+      results[index] = {
+        id: record.id,
+        status: "refused",
+        reason: "That car is not entered in this event.",
+      };
+      return false;
+    }
+    if (record.kind !== "void") return true;
+    // Counted with this batch's earlier voids; a replayed void counts again, which only errs
+    // on the side of refusing at the limit.
+    const already = voids.get(record.entryId) ?? 0;
+    if (already >= MAX_VOIDS_PER_ENTRY) {
+      results[index] = {
+        id: record.id,
+        status: "refused",
+        reason: `This car already has ${MAX_VOIDS_PER_ENTRY} voids, the most one car may have. Ask the chief scrutineer to look over its records.`,
+      };
+      return false;
+    }
+    voids.set(record.entryId, already + 1);
+    return true;
   });
 
   const outcomes = await insertRecords({

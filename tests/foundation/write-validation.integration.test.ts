@@ -33,8 +33,15 @@ describe("POST /api/cars", () => {
     const entrant = new HttpSession(appUrl);
     await entrant.signInWithPassword(demo.entrant, demo.password);
     const before = await countCars();
-    const response = await entrant.fetch("/api/cars", { method: "POST", body: "{not json" });
+    const response = await entrant.fetch("/api/cars", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: "{not json",
+    });
     expect(response.status).toBe(422);
+    // Sent as text (fetch's default type for a string), it is refused by its type: 415.
+    const asText = await entrant.fetch("/api/cars", { method: "POST", body: "{not json" });
+    expect(asText.status).toBe(415);
     expect(await countCars()).toBe(before);
   });
 

@@ -2,37 +2,32 @@
 import { revalidatePath } from "next/cache";
 import type { RevokePassState } from "@/components/pass-revoke-form";
 import { revokePass } from "@/db/queries/revoke-pass";
-import { requirePermission } from "@/lib/auth/require-permission";
 import { AppError } from "@/lib/errors";
-import { zodFieldErrors } from "@/lib/http/zod-field-errors";
+import { defineAction } from "@/lib/http/define-action";
 import { revokePassInputSchema } from "@/lib/passes/revoke-pass-input-schema";
 import { verifyPassOnServer } from "@/lib/passes/verify-pass-on-server";
 
-// Server action — the organizer revokes the pass shown on /p/[token], with a reason.
-export async function revokePassAction(
-  _state: RevokePassState,
-  formData: FormData,
-): Promise<RevokePassState> {
-  const input = revokePassInputSchema.safeParse({
-    token: formData.get("token"),
-    reason: formData.get("reason"),
-  });
-  if (!input.success) {
-    return {
-      status: "error",
-      message: "Some fields need attention.",
-      fields: zodFieldErrors(input.error),
-    };
-  }
-  const { token, reason } = input.data;
-  // The pass id and event come from the signed pass (or the key's row), never from the form.
+/** The pass id and event come from the signed pass (or its key's row), never from the form. */
+async function passOf(token: string): Promise<{ eventId: string; passId: string }> {
   const { eventId, result } = await verifyPassOnServer({ token, now: new Date() });
   const passId = result.ok ? result.claims.jti : result.claims?.jti;
   if (!eventId || !passId) {
-    return { status: "error", message: "Only a pass Plumbline issued can be revoked." };
+    throw new AppError("not_found", "Only a pass Plumbline issued can be revoked.");
   }
-  try {
-    const { user } = await requirePermission({ eventId, permission: "event.manage" });
+  return { eventId, passId };
+}
+
+// Server action — the organizer revokes the pass shown on /p/[token], with a reason.
+export const revokePassAction = defineAction({
+  fields: ["token", "reason"],
+  schema: revokePassInputSchema,
+  access: {
+    permission: "event.manage",
+    eventIdFrom: async ({ token }) => (await passOf(token)).eventId,
+  },
+  refuse: ({ message, fields }): RevokePassState => ({ status: "error", message, fields }),
+  handler: async ({ token, reason }, { user }): Promise<RevokePassState> => {
+    const { eventId, passId } = await passOf(token);
     const { revoked } = await revokePass({ eventId, passId, reason, revokedBy: user.id });
     revalidatePath(`/p/${token}`);
     return {
@@ -41,8 +36,5 @@ export async function revokePassAction(
         ? "Revoked. Phones refuse it once their event pack is refreshed."
         : "This pass was already revoked.",
     };
-  } catch (error) {
-    if (error instanceof AppError) return { status: "error", message: error.message };
-    throw error;
-  }
-}
+  },
+});

@@ -5,10 +5,8 @@ import { z } from "zod";
 import type { PinRuleSetState } from "@/components/rules/pin-rule-set-form";
 import type { RuleSetDraftState } from "@/components/rules/rule-set-editor";
 import { insertRuleSetVersion } from "@/db/queries/insert-rule-set-version";
-import { requirePermission } from "@/lib/auth/require-permission";
-import { AppError } from "@/lib/errors";
+import { defineAction } from "@/lib/http/define-action";
 import { idSchema } from "@/lib/http/id-schema";
-import { zodFieldErrors } from "@/lib/http/zod-field-errors";
 import { checkRuleSetDraft } from "@/lib/rule-sets/check-rule-set-draft";
 import { pinRuleSet } from "@/lib/rule-sets/pin-rule-set";
 import { previewRuleSetChange } from "@/lib/rule-sets/preview-rule-set-change";
@@ -17,33 +15,23 @@ import { MAX_RULE_SET_CHARS } from "@/lib/scrutineer/parse-rule-set-json";
 const draftFormSchema = z.object({
   eventId: idSchema,
   intent: z.enum(["check", "save"]),
-  text: z.string().max(MAX_RULE_SET_CHARS, "That is too long for a rule set."),
-  notes: z.string().trim().max(500, "Keep the note under 500 characters."),
+  text: z.string().max(MAX_RULE_SET_CHARS, "That is too long for a rule set.").default(""),
+  notes: z.string().max(500, "Keep the note under 500 characters.").trim().default(""),
 });
 
 // Server action — the organizer checks a draft rule-set version (schema, successor rules and the
 // verdicts it would change) and, with intent "save", stores it as the next version.
-export async function draftRuleSetAction(
-  _state: RuleSetDraftState,
-  formData: FormData,
-): Promise<RuleSetDraftState> {
-  const form = draftFormSchema.safeParse({
-    eventId: formData.get("eventId"),
-    intent: formData.get("intent"),
-    text: formData.get("text") ?? "",
-    notes: formData.get("notes") ?? "",
-  });
-  if (!form.success) {
-    return {
-      status: "error",
-      message: "Some fields need attention.",
-      fields: zodFieldErrors(form.error),
-      issues: [],
-    };
-  }
-  const { eventId, intent, text, notes } = form.data;
-  try {
-    const { user } = await requirePermission({ eventId, permission: "rule-sets.manage" });
+export const draftRuleSetAction = defineAction({
+  fields: ["eventId", "intent", "text", "notes"],
+  schema: draftFormSchema,
+  access: { permission: "rule-sets.manage", eventId: (form) => form.eventId },
+  refuse: ({ message, fields }): RuleSetDraftState => ({
+    status: "error",
+    message,
+    fields,
+    issues: [],
+  }),
+  handler: async ({ eventId, intent, text, notes }, { user }): Promise<RuleSetDraftState> => {
     const checked = await checkRuleSetDraft({ eventId, text });
     if (!checked.ok) {
       return {
@@ -72,13 +60,8 @@ export async function draftRuleSetAction(
     });
     revalidatePath(`/organizer/${eventId}/rules`);
     redirect(`/organizer/${eventId}/rules?version=${saved.id}`);
-  } catch (error) {
-    if (error instanceof AppError) {
-      return { status: "error", message: error.message, fields: error.fields, issues: [] };
-    }
-    throw error;
-  }
-}
+  },
+});
 
 const pinFormSchema = z.object({
   eventId: idSchema,
@@ -88,25 +71,12 @@ const pinFormSchema = z.object({
 
 // Server action — the organizer makes a saved version the one the event judges cars by; every
 // verdict is recomputed and drivers whose verdict changed are e-mailed.
-export async function pinRuleSetAction(
-  _state: PinRuleSetState,
-  formData: FormData,
-): Promise<PinRuleSetState> {
-  const form = pinFormSchema.safeParse({
-    eventId: formData.get("eventId"),
-    versionId: formData.get("versionId"),
-    confirm: formData.get("confirm"),
-  });
-  if (!form.success) {
-    return {
-      status: "error",
-      message: "Some fields need attention.",
-      fields: zodFieldErrors(form.error),
-    };
-  }
-  const { eventId, versionId } = form.data;
-  try {
-    const { user } = await requirePermission({ eventId, permission: "rule-sets.manage" });
+export const pinRuleSetAction = defineAction({
+  fields: ["eventId", "versionId", "confirm"],
+  schema: pinFormSchema,
+  access: { permission: "rule-sets.manage", eventId: (form) => form.eventId },
+  refuse: ({ message, fields }): PinRuleSetState => ({ status: "error", message, fields }),
+  handler: async ({ eventId, versionId }, { user }): Promise<PinRuleSetState> => {
     const result = await pinRuleSet({ eventId, versionId, userId: user.id });
     if (result.previousVersion === null) {
       return {
@@ -118,8 +88,5 @@ export async function pinRuleSetAction(
     redirect(
       `/organizer/${eventId}/rules?pinned=${result.version}&changed=${result.changed}&mailed=${result.mailed}`,
     );
-  } catch (error) {
-    if (error instanceof AppError) return { status: "error", message: error.message };
-    throw error;
-  }
-}
+  },
+});

@@ -1,14 +1,14 @@
 import { NextResponse } from "next/server";
 import { getPaddockBoard } from "@/lib/board/get-paddock-board";
-import { handleRoute } from "@/lib/http/handle-route";
-import { idSchema } from "@/lib/http/id-schema";
-
-type Context = { params: Promise<{ eventId: string }> };
+import { defineRoute } from "@/lib/http/define-route";
+import { eventParams } from "@/lib/http/route-params";
 
 // GET /api/events/[eventId]/board — the public paddock board: car numbers, classes, verdict states.
-// Public on purpose (it is the sheet on the paddock wall); it carries no names or readings.
-export const GET = handleRoute(async (_request: Request, { params }: Context) => {
-  const eventId = idSchema.parse((await params).eventId);
-  const board = await getPaddockBoard({ eventId, now: new Date() });
-  return NextResponse.json(board, { headers: { "cache-control": "no-store" } });
+export const GET = defineRoute({
+  params: eventParams,
+  access: { public: "the sheet on the paddock wall: car numbers, classes and states, no names" },
+  handler: async (_request, { params }) => {
+    const board = await getPaddockBoard({ eventId: params.eventId, now: new Date() });
+    return NextResponse.json(board, { headers: { "cache-control": "no-store" } });
+  },
 });

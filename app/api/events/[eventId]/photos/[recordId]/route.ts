@@ -1,22 +1,20 @@
-import { requirePermission } from "@/lib/auth/require-permission";
+import { z } from "zod";
 import { AppError } from "@/lib/errors";
-import { handleRoute } from "@/lib/http/handle-route";
+import { defineRoute } from "@/lib/http/define-route";
 import { idSchema } from "@/lib/http/id-schema";
-import { getObject } from "@/lib/storage/get-object";
-import { photoStorageKey } from "@/lib/tech/photo-storage-key";
-
-type Context = { params: Promise<{ eventId: string; recordId: string }> };
+import { eventRecordParams, pathEvent } from "@/lib/http/route-params";
+import { loadPhoto } from "@/lib/tech/load-photo";
 
 // GET /api/events/[eventId]/photos/[recordId]?entry=<entryId> — a tech-line photo, for officials.
-export const GET = handleRoute(async (request: Request, { params }: Context) => {
-  const { eventId: rawEvent, recordId: rawRecord } = await params;
-  const eventId = idSchema.parse(rawEvent);
-  const recordId = idSchema.parse(rawRecord);
-  const entryId = idSchema.parse(new URL(request.url).searchParams.get("entry"));
-  await requirePermission({ eventId, permission: "tech.read" });
-  const object = await getObject(photoStorageKey({ eventId, entryId, recordId }));
-  if (!object) throw new AppError("not_found", "No such photo.");
-  return new Response(Buffer.from(object.body), {
-    headers: { "content-type": object.contentType, "cache-control": "private, max-age=86400" },
-  });
+export const GET = defineRoute({
+  params: eventRecordParams,
+  query: z.object({ entry: idSchema }),
+  access: { permission: "tech.read", eventId: pathEvent },
+  handler: async (_request, { params, query }) => {
+    const photo = await loadPhoto({ ...params, entryId: query.entry });
+    if (!photo) throw new AppError("not_found", "No such photo.");
+    return new Response(Buffer.from(photo.body), {
+      headers: { "content-type": photo.contentType, "cache-control": "private, max-age=86400" },
+    });
+  },
 });
