@@ -5,28 +5,40 @@ import { env } from "./lib/env";
 import { actionBodyLimit } from "./lib/http/action-body-limit";
 import { describeBytes } from "./lib/http/body-limits";
 import { contentSecurityPolicy } from "./lib/http/content-security-policy";
+import { multipartHeadersProblem } from "./lib/http/multipart-headers-problem";
 
 const { auth } = NextAuth(authConfig);
 const https = env.APP_URL.startsWith("https:");
 
-/** A server action's body over its page's limit is refused before Next reads it. */
-function refuseLargeAction(request: NextRequest): Response | null {
+const plain = (status: number, text: string) =>
+  new Response(text, { status, headers: { "content-type": "text/plain; charset=utf-8" } });
+
+/**
+ * A server action's body over its page's limit is refused before Next reads it; one whose form
+ * parts Next's parser could not read is refused as the client's mistake, not answered 500.
+ */
+async function refuseBadAction(request: NextRequest): Promise<Response | null> {
   if (request.method !== "POST" || !request.headers.has("next-action")) return null;
   const limit = actionBodyLimit(request.nextUrl.pathname);
   const length = request.headers.get("content-length");
-  if (length !== null && /^\d+$/.test(length) && Number(length) <= limit) return null;
-  return new Response(`That form sends more than this page takes (${describeBytes(limit)}).`, {
-    status: length === null ? 411 : 413,
-    headers: { "content-type": "text/plain; charset=utf-8" },
-  });
+  if (length === null || !/^\d+$/.test(length) || Number(length) > limit) {
+    return plain(
+      length === null ? 411 : 413,
+      `That form sends more than this page takes (${describeBytes(limit)}).`,
+    );
+  }
+  const type = request.headers.get("content-type") ?? "";
+  if (!/^multipart\/form-data/i.test(type)) return null;
+  const problem = multipartHeadersProblem(await request.clone().text(), type);
+  return problem === null ? null : plain(400, problem);
 }
 
 // Every page request: server-action bodies capped by page; the optimistic redirect to sign-in
 // for signed-in areas (pages, handlers and actions still check permissions themselves); and a
 // content security policy with a fresh nonce, which Next puts on its own scripts.
 export const proxy = auth(async (request) => {
-  const tooLarge = refuseLargeAction(request);
-  if (tooLarge) return tooLarge;
+  const refused = await refuseBadAction(request);
+  if (refused) return refused;
   const allowed = authConfig.callbacks.authorized({ auth: request.auth, request });
   if (!allowed) {
     // Built on the configured origin, never on a request header, with the path to come back to.

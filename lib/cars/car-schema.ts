@@ -1,7 +1,8 @@
 import { z } from "zod";
 
-/** A car in an entrant's garage, as typed into the form or sent to POST /api/cars. */
-export const carInputSchema = z.object({
+/** A car in an entrant's garage, as typed into the form or sent to POST /api/cars. Strict: a
+ * field the app does not know is refused, never silently dropped. */
+export const carInputSchema = z.strictObject({
   make: z
     .string()
     .trim()

@@ -2,6 +2,7 @@ import "server-only";
 import { headers } from "next/headers";
 import type { z } from "zod";
 import { authorizeAccess, type Caller, type SignedInCaller } from "../auth/authorize-access";
+import { getSessionUser } from "../auth/get-session-user";
 import type { Permission } from "../auth/permissions";
 import type { RouteAccess } from "../auth/route-access";
 import { env } from "../env";
@@ -72,6 +73,8 @@ export function defineAction<S extends z.ZodType, State, A extends ActionAccess<
 
 async function authorize<I>(access: ActionAccess<I>, input: I): Promise<Caller> {
   if ("eventIdFrom" in access) {
+    // Signed in first: a signed-out caller learns nothing from the lookup.
+    if (!(await getSessionUser())) throw new AppError("unauthenticated", "Sign in first.");
     const eventId = await access.eventIdFrom(input);
     return authorizeAccess({ permission: access.permission, eventId: () => eventId }, input);
   }

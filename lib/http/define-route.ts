@@ -67,7 +67,9 @@ export function defineRoute<
 }
 
 async function readBody<B>(request: Request, spec: BodySpec<B>): Promise<B> {
-  const type = (request.headers.get("content-type") ?? "").toLowerCase();
+  // The multipart boundary is case-sensitive: compare in lower case, parse with the original.
+  const contentType = request.headers.get("content-type") ?? "";
+  const type = contentType.toLowerCase();
   const limit = BODY_LIMITS[spec.limit];
   if ("json" in spec) {
     if (!type.startsWith("application/json")) {
@@ -91,7 +93,7 @@ async function readBody<B>(request: Request, spec: BodySpec<B>): Promise<B> {
   }
   const bytes = await readCappedBody(request, limit);
   const form = await new Response(bytes as Uint8Array<ArrayBuffer>, {
-    headers: { "content-type": type },
+    headers: { "content-type": contentType },
   })
     .formData()
     .catch(() => {

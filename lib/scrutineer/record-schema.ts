@@ -192,13 +192,14 @@ const base = {
 };
 
 /**
- * An immutable tech-line record. The phone makes them, the server stores them, and
+ * An immutable tech-line record (strict: a record with a field the server does not know is
+ * refused, so nothing a phone sends is silently dropped). The phone makes them, the server stores them, and
  * `evaluateEntry` derives the verdict from all of an entry's records.
  */
 export const recordSchema = z.discriminatedUnion("kind", [
-  z.object({ ...base, kind: z.literal("reading"), payload: readingPayloadSchema }),
-  z.object({ ...base, kind: z.literal("checklist"), payload: checklistPayloadSchema }),
-  z.object({
+  z.strictObject({ ...base, kind: z.literal("reading"), payload: readingPayloadSchema }),
+  z.strictObject({ ...base, kind: z.literal("checklist"), payload: checklistPayloadSchema }),
+  z.strictObject({
     ...base,
     kind: z.literal("photo"),
     payload: z.object({
@@ -206,12 +207,12 @@ export const recordSchema = z.discriminatedUnion("kind", [
       caption: z.string().max(RECORD_TEXT_LIMITS.photoCaption).optional(),
     }),
   }),
-  z.object({
+  z.strictObject({
     ...base,
     kind: z.literal("note"),
     payload: z.object({ text: z.string().min(1).max(RECORD_TEXT_LIMITS.note) }),
   }),
-  z.object({
+  z.strictObject({
     ...base,
     kind: z.literal("void"),
     payload: z.object({
@@ -223,7 +224,7 @@ export const recordSchema = z.discriminatedUnion("kind", [
         .min(3, "Say why the record is void"),
     }),
   }),
-  z.object({ ...base, kind: z.literal("override"), payload: overridePayloadSchema }),
+  z.strictObject({ ...base, kind: z.literal("override"), payload: overridePayloadSchema }),
 ]);
 /** One record; see {@link recordSchema}. */
 export type TechRecord = z.infer<typeof recordSchema>;

@@ -78,6 +78,8 @@ export function describeRecordIssue(issue: z.core.$ZodIssue | undefined, raw: un
       return value === undefined
         ? `${capital(subject)} is missing.`
         : `${capital(subject)} is not in a form this app can read.`;
+    case "unrecognized_keys":
+      return "This record carries parts this version of Plumbline does not know; update the app and record it again.";
     default:
       return `${capital(subject)} is not one this app knows; update the app and record it again.`;
   }

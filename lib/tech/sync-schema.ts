@@ -5,7 +5,7 @@ import type { PackVerdict } from "../offline/event-pack-schema";
 export const MAX_SYNC_BATCH = 200;
 
 /** POST /api/events/[eventId]/sync — the outer shape; each record is checked on its own. */
-export const syncRequestSchema = z.object({
+export const syncRequestSchema = z.strictObject({
   deviceId: z.string().min(1).max(64),
   records: z.array(z.unknown()).min(1, "Send at least one record").max(MAX_SYNC_BATCH),
 });

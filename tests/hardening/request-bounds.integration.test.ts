@@ -88,6 +88,29 @@ describe("body limits", () => {
   });
 });
 
+describe("multipart forms as browsers send them", () => {
+  it("reads a form whose boundary has capitals (Chromium's), as the photo upload sends it", async () => {
+    const boundary = "----WebKitFormBoundaryQz7XkPa9LmN2bVcD";
+    const body = [
+      `--${boundary}`,
+      'Content-Disposition: form-data; name="recordId"',
+      "",
+      "not-a-uuid",
+      `--${boundary}--`,
+      "",
+    ].join("\r\n");
+    const response = await sam.fetch(`/api/events/${fx.eventId}/uploads`, {
+      method: "POST",
+      headers: { "content-type": `multipart/form-data; boundary=${boundary}` },
+      body,
+    });
+    // Read, then refused for its fields (422 naming recordId), not "the form could not be read".
+    expect(response.status).toBe(422);
+    const answer = (await response.json()) as { error: { fields?: Record<string, string[]> } };
+    expect(answer.error.fields?.recordId).toBeDefined();
+  });
+});
+
 describe("the origin of cookie-carrying writes", () => {
   it("refuses a sync posted from another site's page with 403", async () => {
     const response = await sam.fetch(`/api/events/${fx.eventId}/sync`, {

@@ -1,0 +1,253 @@
+// The authorization matrix: every route handler and every server action in app/ (found by
+// reading the folder, so a new one without a row fails the first test) × signed out, the entry's
+// own entrant, another entrant, each official role, and an official of another event → the
+// status each must get. Writes are sent with a body that is refused after the guard (422), or
+// one that changes nothing, so allowed callers show the guard let them through.
+import { randomUUID } from "node:crypto";
+import { v7 as uuidv7 } from "uuid";
+import { beforeAll, describe, expect, inject, it } from "vitest";
+import { signPass } from "@/lib/passes/sign-pass";
+import { actionOutcome, callServerAction, listServerActions } from "../support/call-server-action";
+import type { HttpSession } from "../support/http-session";
+import { listRouteHandlers, listServerActionSources } from "../support/list-app-endpoints";
+import { type CallerName, callerNames, matrixCallers } from "../support/matrix-callers";
+import { queryTestDb } from "../support/query-test-db";
+
+const appUrl = inject("appUrl");
+const databaseUrl = inject("databaseUrl");
+
+type Expect = Record<CallerName, number>;
+type Ctx = { eventId: string; entryId: string; versionId: string; passToken: string };
+
+/** Everyone gets `status`. */
+const all = (status: number): Expect =>
+  Object.fromEntries(callerNames.map((c) => [c, status])) as Expect;
+/** Signed-out 401; the named callers `ok`; everyone else 403. */
+const only = (ok: number, ...allowed: CallerName[]): Expect =>
+  Object.fromEntries(
+    callerNames.map((c) => [c, c === "anonymous" ? 401 : allowed.includes(c) ? ok : 403]),
+  ) as Expect;
+const officials: CallerName[] = ["scrutineer", "chief", "clerk", "registrar", "organizer"];
+const techReaders: CallerName[] = ["scrutineer", "chief", "clerk", "organizer"];
+const writers: CallerName[] = ["scrutineer", "chief"];
+const signedIn = (ok: number): Expect => ({ ...all(ok), anonymous: 401 });
+
+const json = (body: unknown): RequestInit => ({
+  method: "POST",
+  headers: { "content-type": "application/json" },
+  body: JSON.stringify(body),
+});
+
+type Row = {
+  expect: Expect;
+  call: (s: HttpSession, c: Ctx) => Promise<number>;
+};
+const get = (url: (c: Ctx) => string) => async (s: HttpSession, c: Ctx) =>
+  (await s.fetch(url(c))).status;
+const post = (url: (c: Ctx) => string, init: () => RequestInit) => async (s: HttpSession, c: Ctx) =>
+  (await s.fetch(url(c), init())).status;
+const action =
+  (
+    name: string,
+    page: (c: Ctx) => string,
+    fields: (c: Ctx) => Record<string, string>,
+    state?: unknown,
+  ) =>
+  async (s: HttpSession, c: Ctx) =>
+    actionOutcome(
+      await callServerAction(s, { action: name, page: page(c), fields: fields(c), state }),
+    );
+
+const routes: Record<string, Row> = {
+  "GET /api/auth/[...nextauth]": { expect: all(200), call: get(() => "/api/auth/providers") },
+  "POST /api/auth/[...nextauth]": {
+    // No CSRF token: Auth.js refuses and sends the browser back to sign-in, whoever asks.
+    expect: all(302),
+    call: post(
+      () => "/api/auth/signout",
+      () => ({
+        method: "POST",
+        headers: { "content-type": "application/x-www-form-urlencoded" },
+        body: "",
+      }),
+    ),
+  },
+  "GET /api/cars": { expect: signedIn(200), call: get(() => "/api/cars") },
+  "POST /api/cars": {
+    expect: signedIn(422),
+    call: post(
+      () => "/api/cars",
+      () => json({}),
+    ),
+  },
+  "GET /api/entries/[entryId]/verdict": {
+    expect: { ...only(200, "owner", ...officials) },
+    call: get((c) => `/api/entries/${c.entryId}/verdict`),
+  },
+  "GET /api/events/[eventId]/board": {
+    expect: all(200),
+    call: get((c) => `/api/events/${c.eventId}/board`),
+  },
+  "GET /api/events/[eventId]/entries": {
+    expect: only(200, ...officials),
+    call: get((c) => `/api/events/${c.eventId}/entries`),
+  },
+  "GET /api/events/[eventId]/pack": {
+    expect: only(200, ...techReaders),
+    call: get((c) => `/api/events/${c.eventId}/pack`),
+  },
+  "GET /api/events/[eventId]/photos/[recordId]": {
+    // Allowed callers reach the store, which has no such photo.
+    expect: only(404, ...techReaders),
+    call: get((c) => `/api/events/${c.eventId}/photos/${randomUUID()}?entry=${c.entryId}`),
+  },
+  "GET /api/events/[eventId]/registration/csv": {
+    expect: only(200, "registrar"),
+    call: get((c) => `/api/events/${c.eventId}/registration/csv`),
+  },
+  "GET /api/events/[eventId]/rule-sets/[versionId]": {
+    expect: only(200, ...officials),
+    call: get((c) => `/api/events/${c.eventId}/rule-sets/${c.versionId}`),
+  },
+  "POST /api/events/[eventId]/sync": {
+    expect: only(422, ...writers),
+    call: post(
+      (c) => `/api/events/${c.eventId}/sync`,
+      () => json({ deviceId: "m", records: [] }),
+    ),
+  },
+  "POST /api/events/[eventId]/uploads": {
+    expect: only(422, ...writers),
+    call: post(
+      (c) => `/api/events/${c.eventId}/uploads`,
+      () => ({ method: "POST", body: new FormData() }),
+    ),
+  },
+  "GET /api/health": { expect: all(200), call: get(() => "/api/health") },
+};
+
+// A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
+const signedInPage = (expect: Expect): Expect => ({ ...expect, anonymous: 307 });
+
+const actions: Record<string, Row> = {
+  "app/(officials)/organizer/[eventId]/rules/actions.ts#draftRuleSetAction": {
+    expect: signedInPage(only(200, "organizer")),
+    call: action(
+      "app/(officials)/organizer/[eventId]/rules/actions.ts#draftRuleSetAction",
+      (c) => `/organizer/${c.eventId}/rules`,
+      (c) => ({ eventId: c.eventId, intent: "check", text: "{}", notes: "" }),
+      { status: "idle", issues: [] },
+    ),
+  },
+  "app/(officials)/organizer/[eventId]/rules/actions.ts#pinRuleSetAction": {
+    // The organizer is let through, and told that no such version exists.
+    expect: signedInPage(only(200, "organizer")),
+    call: action(
+      "app/(officials)/organizer/[eventId]/rules/actions.ts#pinRuleSetAction",
+      (c) => `/organizer/${c.eventId}/rules`,
+      (c) => ({ eventId: c.eventId, versionId: randomUUID(), confirm: "yes" }),
+      { status: "idle" },
+    ),
+  },
+  "app/p/[token]/actions.ts#revokePassAction": {
+    expect: only(200, "organizer"),
+    call: action(
+      "app/p/[token]/actions.ts#revokePassAction",
+      (c) => `/p/${c.passToken}`,
+      (c) => ({ token: c.passToken, reason: "matrix test: pass revoked" }),
+      { status: "idle" },
+    ),
+  },
+  "app/(auth)/sign-in/actions.ts#signInWithPassword": {
+    // Public: anyone may try; a wrong password is answered on the form.
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-in/actions.ts#signInWithPassword",
+      () => "/sign-in",
+      () => ({ email: "nobody@brackenmoor.test", password: "not-a-password" }),
+      {},
+    ),
+  },
+  "app/(auth)/sign-in/actions.ts#signInWithEmailLink": {
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-in/actions.ts#signInWithEmailLink",
+      () => "/sign-in",
+      () => ({ email: "not an address" }),
+      {},
+    ),
+  },
+};
+
+let ctx: Ctx;
+let sessions: Record<CallerName, HttpSession>;
+
+beforeAll(async () => {
+  const callers = await matrixCallers(appUrl, databaseUrl);
+  sessions = callers.sessions;
+  const [event] = await queryTestDb<{ rule_set_version_id: string }>(
+    databaseUrl,
+    "select rule_set_version_id from events where id = ?",
+    [callers.eventId],
+  );
+  // The event's pass key is made on first use; the chief's event pack makes it.
+  await sessions.chief.fetch(`/api/events/${callers.eventId}/pack`);
+  const [key] = await queryTestDb<{ kid: string; private_key_pkcs8: string }>(
+    databaseUrl,
+    "select kid, private_key_pkcs8 from event_pass_keys where event_id = ? and retired_at is null limit 1",
+    [callers.eventId],
+  );
+  if (!event || !key) throw new Error("no rule set or pass key");
+  ctx = {
+    eventId: callers.eventId,
+    entryId: callers.ownEntryId,
+    versionId: event.rule_set_version_id,
+    // A genuine pass of the event (its own key), with an id of its own: revoking it touches
+    // no pass another test uses.
+    passToken: signPass({
+      kid: key.kid,
+      privateKeyPkcs8: key.private_key_pkcs8,
+      claims: {
+        evt: callers.eventId,
+        ent: callers.ownEntryId,
+        car: 7,
+        iat: Math.floor(Date.now() / 1000),
+        exp: Math.floor(Date.now() / 1000) + 86_400,
+        jti: uuidv7(),
+      },
+    }),
+  };
+}, 60_000);
+
+describe("the authorization matrix", () => {
+  it("has a row for every route handler and server action in app/", () => {
+    expect(Object.keys(routes).sort()).toEqual(listRouteHandlers());
+    const sources = listServerActionSources().filter((a) => !a.endsWith("#signOutAction"));
+    expect(Object.keys(actions).sort()).toEqual(sources.sort());
+    // And the build under test has exactly these actions (plus signing out, below).
+    expect([...listServerActions().keys()].sort()).toEqual(listServerActionSources());
+  });
+
+  for (const [name, row] of Object.entries({ ...routes, ...actions })) {
+    it(name, async () => {
+      const got: Partial<Expect> = {};
+      for (const caller of callerNames) got[caller] = await row.call(sessions[caller], ctx);
+      expect(got).toEqual(row.expect);
+    });
+  }
+
+  it("app/sign-out-action.ts#signOutAction signs out whoever calls it, and only them", async () => {
+    const { sessions: fresh } = await matrixCallers(appUrl, databaseUrl);
+    for (const caller of callerNames) {
+      const outcome = await callServerAction(fresh[caller], {
+        action: "app/sign-out-action.ts#signOutAction",
+        page: "/",
+        fields: {},
+      });
+      expect([200, 303]).toContain(outcome.status);
+      expect(fresh[caller].hasCookie("authjs.session-token")).toBe(false);
+    }
+    // The matrix's own sessions are untouched.
+    expect((await sessions.scrutineer.fetch("/api/cars")).status).toBe(200);
+  });
+});
