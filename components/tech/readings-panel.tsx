@@ -1,6 +1,7 @@
 "use client";
 import { useMemo, useState } from "react";
 import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { readingContext } from "@/lib/scrutineer/reading-context";
 import type { TechRecord } from "@/lib/scrutineer/record-schema";
 import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
 import type { Verdict } from "@/lib/scrutineer/verdict-schema";
@@ -28,6 +29,11 @@ export function ReadingsPanel({
   // The engine's void rule, so the card strikes through exactly what the verdict leaves out.
   const { voided, voidedBy: voids } = useMemo(() => resolveVoids(records), [records]);
   const readings = records.filter((r): r is Reading => r.kind === "reading");
+  // The car's other readings, as the engine sees them, to check a new reading against.
+  const context = useMemo(
+    () => readingContext(readings.filter((r) => !voided.has(r.id))),
+    [readings, voided],
+  );
   const nameOf = (id: string) =>
     id === official.id
       ? "you"
@@ -124,6 +130,7 @@ export function ReadingsPanel({
                           corner={target.corner}
                           earlier={mine}
                           voided={voided}
+                          context={context}
                         />
                       </div>
                     ) : null}
