@@ -1,7 +1,8 @@
 "use client";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
 import { RECORD_TEXT_LIMITS, type TechRecord } from "@/lib/scrutineer/record-schema";
+import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
 import { CharacterCount } from "./character-count";
 import { PhotoThumb } from "./photo-thumb";
@@ -20,9 +21,8 @@ export function PhotosNotesPanel({ entryId, records }: { entryId: string; record
   const [note, setNote] = useState("");
   const [busy, setBusy] = useState(false);
   const [photoError, setPhotoError] = useState<string | null>(null);
-  const voids = new Map(
-    records.flatMap((r) => (r.kind === "void" ? [[r.payload.targetRecordId, r] as const] : [])),
-  );
+  // The engine's void rule: a void that was itself voided no longer hides its photo or note.
+  const { voidedBy: voids } = useMemo(() => resolveVoids(records), [records]);
   const photos = records.filter((r): r is Photo => r.kind === "photo" && !voids.has(r.id));
   const notes = records.filter((r): r is Note => r.kind === "note");
   const byline = (r: TechRecord) =>

@@ -5,7 +5,9 @@ import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
 import { makeRecord } from "@/lib/offline/make-record";
 import { convertMass } from "@/lib/scrutineer/convert-mass";
 import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { implausibleReading } from "@/lib/scrutineer/implausible-reading";
 import { parseLength } from "@/lib/scrutineer/parse-length";
+import type { ReadingContext } from "@/lib/scrutineer/reading-context";
 import {
   type Corner,
   type Dimension,
@@ -19,6 +21,7 @@ import {
 } from "@/lib/tech/compare-with-own-readings";
 import { defaultInstruments } from "@/lib/tech/default-instruments";
 import { formatReadingValue } from "./format-reading-value";
+import { ImplausibleReadingWarning } from "./implausible-reading-warning";
 import { readingExample } from "./reading-example";
 import { ReadingMismatchWarning } from "./reading-mismatch-warning";
 import { sentenceCase } from "./sentence-case";
@@ -30,8 +33,9 @@ const unitOf = (d: Dimension) =>
 /**
  * Record one reading of one dimension: where it is taken (drawing), the value in the event's unit
  * (or any unit written with it), the instrument, and the conditions the rule set asks for.
- * A reading that disagrees with the scrutineer's own earlier ones is held for a second look
- * ("Save anyway" / "Fix it"), never refused.
+ * A reading that cannot plausibly be true (the rule set's range, the car's other readings), or
+ * that disagrees with the scrutineer's own earlier ones, is held for a second look ("Check this
+ * reading": "Save anyway" / "Fix it"), never refused.
  */
 export function ReadingEntry({
   entryId,
@@ -39,6 +43,7 @@ export function ReadingEntry({
   corner,
   earlier,
   voided,
+  context,
 }: {
   entryId: string;
   dimension: Dimension;
@@ -46,6 +51,8 @@ export function ReadingEntry({
   /** This car's readings of this dimension (and corner) as the phone knows them. */
   earlier: ReadonlyArray<TechRecordOf<"reading">>;
   voided: ReadonlySet<string>;
+  /** The car's other readings (means, non-void), to check this one against. */
+  context: ReadingContext;
 }) {
   const { ruleSet, pack, official, deviceId, record, canWrite } = useTech();
   const unitSystem = pack.event.unitSystem;
@@ -56,10 +63,11 @@ export function ReadingEntry({
   const [text, setText] = useState("");
   const [error, setError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const [held, setHeld] = useState<{
-    payload: ReadingPayload;
-    mismatch: OwnReadingMismatch;
-  } | null>(null);
+  const [held, setHeld] = useState<
+    | { payload: ReadingPayload; mismatch: OwnReadingMismatch }
+    | { payload: ReadingPayload; implausible: string }
+    | null
+  >(null);
   const input = useRef<HTMLInputElement>(null);
   const conditions =
     dimension === "cornerWeightKg" ? ruleSet.measurement.weighing : ruleSet.measurement.aero;
@@ -101,6 +109,12 @@ export function ReadingEntry({
       dimension === "cornerWeightKg"
         ? { ...base, dimension, corner: corner ?? "lf" }
         : ({ ...base, dimension } as ReadingPayload);
+    // First: can the number be true at all (range, and the car's other readings)?
+    const implausible = implausibleReading({ reading: payload, ruleSet, context, unitSystem });
+    if (implausible) {
+      setHeld({ payload, implausible });
+      return;
+    }
     const mismatch = compareWithOwnReadings({
       reading: payload,
       officialId: official.id,
@@ -214,7 +228,17 @@ export function ReadingEntry({
             driver aboard {conditions.driverAboard ? "(the rule says yes)" : "(the rule says no)"}
           </label>
         </fieldset>
-        {held ? (
+        {held && "implausible" in held ? (
+          <ImplausibleReadingWarning
+            why={held.implausible}
+            onSaveAnyway={() => void keep(held.payload)}
+            onFix={() => {
+              setHeld(null);
+              input.current?.focus();
+              input.current?.select();
+            }}
+          />
+        ) : held ? (
           <ReadingMismatchWarning
             label={label}
             value={formatReadingValue(dimension, held.payload.value, unitSystem)}

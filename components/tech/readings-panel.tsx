@@ -1,7 +1,9 @@
 "use client";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { readingContext } from "@/lib/scrutineer/reading-context";
 import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
 import type { Verdict } from "@/lib/scrutineer/verdict-schema";
 import { formatReadingValue } from "./format-reading-value";
 import { ReadingEntry } from "./reading-entry";
@@ -24,11 +26,14 @@ export function ReadingsPanel({
 }) {
   const { pack, local, official } = useTech();
   const [open, setOpen] = useState<string | null>(null);
-  const voids = new Map(
-    records.flatMap((r) => (r.kind === "void" ? [[r.payload.targetRecordId, r] as const] : [])),
-  );
-  const voided = new Set(voids.keys());
+  // The engine's void rule, so the card strikes through exactly what the verdict leaves out.
+  const { voided, voidedBy: voids } = useMemo(() => resolveVoids(records), [records]);
   const readings = records.filter((r): r is Reading => r.kind === "reading");
+  // The car's other readings, as the engine sees them, to check a new reading against.
+  const context = useMemo(
+    () => readingContext(readings.filter((r) => !voided.has(r.id))),
+    [readings, voided],
+  );
   const nameOf = (id: string) =>
     id === official.id
       ? "you"
@@ -125,6 +130,7 @@ export function ReadingsPanel({
                           corner={target.corner}
                           earlier={mine}
                           voided={voided}
+                          context={context}
                         />
                       </div>
                     ) : null}

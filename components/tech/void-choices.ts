@@ -1,5 +1,6 @@
 import { DIMENSION_LABELS, dimensionLabel } from "@/lib/scrutineer/dimension-labels";
 import type { Dimension, TechRecord, TechRecordOf } from "@/lib/scrutineer/record-schema";
+import { voidedRecordIds } from "@/lib/scrutineer/voided-record-ids";
 import { formatClockTime } from "@/lib/tech/format-clock-time";
 import { formatReadingValue } from "./format-reading-value";
 import { sentenceCase } from "./sentence-case";
@@ -24,17 +25,8 @@ export function voidChoices(args: {
   unitSystem: "mm" | "in";
   timeZone: string;
 }): VoidGroup[] {
-  const voidsOf = new Map<string, string[]>();
-  for (const r of args.records) {
-    if (r.kind !== "void") continue;
-    voidsOf.set(r.payload.targetRecordId, [...(voidsOf.get(r.payload.targetRecordId) ?? []), r.id]);
-  }
-  // A void counts unless it is itself voided (that is how a void is undone); loops count as none.
-  const isVoided = (id: string, seen: ReadonlySet<string>): boolean =>
-    (voidsOf.get(id) ?? []).some((v) => !seen.has(v) && !isVoided(v, new Set([...seen, v])));
-  const voided = new Set(
-    args.records.filter((r) => isVoided(r.id, new Set([r.id]))).map((r) => r.id),
-  );
+  // The engine's own void rule: a void counts unless it is itself voided; loops count as none.
+  const voided = voidedRecordIds(args.records);
   const byAt = (a: TechRecord, b: TechRecord) =>
     Date.parse(b.deviceTime) - Date.parse(a.deviceTime) || (a.id < b.id ? 1 : -1);
   const tail = (r: TechRecord) =>

@@ -115,6 +115,74 @@ const demoRuleSetInput = {
       bodyWidth: "The body at its widest point, mirrors excluded.",
       splitterFront: "The foremost point of the front bumper.",
     },
+    // What a reading can plausibly be on a car at the tech line; outside it the phone asks the
+    // scrutineer to check, and the chief scrutineer sees the car. Wide on purpose: they catch a
+    // slip of the finger or the unit, not an unusual car.
+    plausible: {
+      wingTopFromGroundMm: {
+        min: 700,
+        max: 2000,
+        source:
+          "Common practice (no source): no car's rear deck is below 700 mm; a time-attack wing rarely stands 2 m tall.",
+      },
+      roofPeakFromGroundMm: {
+        min: 950,
+        max: 2100,
+        source:
+          "From memory: the lowest road cars are about 1,000 mm tall (the GT40 was named for its 40 in); large vans about 2,000 mm.",
+      },
+      wingOverhangMm: {
+        min: -1500,
+        max: 700,
+        source:
+          "Common practice (no source): club rules allow 200 mm behind the bodywork (Motorsport UK NCR 2026 Ch.14 App.4); unlimited cars rarely reach 700 mm.",
+      },
+      wingSpanMm: {
+        min: 500,
+        max: 2400,
+        source: "Common practice (no source): about as wide as the body or narrower.",
+      },
+      endPlateThicknessMm: {
+        min: 0.5,
+        max: 100,
+        source: "Common practice (no source): end plates are sheet or a few centimetres of box.",
+      },
+      bodyWidthMm: {
+        min: 1300,
+        max: 2400,
+        source:
+          "From memory: Japanese kei cars are at most 1,480 mm wide; the widest road cars about 2,100 mm, wide-body kits a little more.",
+      },
+      splitterProtrusionMm: {
+        min: -200,
+        max: 600,
+        source:
+          "Common practice (no source): club rules allow 100–200 mm ahead of the bumper (DOMAIN.md table); unlimited cars rarely 600 mm.",
+      },
+      splitterWidthMm: {
+        min: 800,
+        max: 2400,
+        source: "Common practice (no source): about as wide as the body or narrower.",
+      },
+      wingChordMm: {
+        min: 50,
+        max: 700,
+        source:
+          "Common practice (no source): club rules cap the chord at 355.6 mm (14 in) in some classes; unlimited wings rarely reach 700 mm.",
+      },
+      cornerWeightKg: {
+        min: 40,
+        max: 1000,
+        source:
+          "Common practice (no source): the lightest club cars weigh about 500 kg, the heaviest road cars about 2,500 kg, over four corners.",
+      },
+      noiseDbA: {
+        min: 60,
+        max: 140,
+        source:
+          "Common practice (no source): club static-test limits are about 105 dB(A) (Motorsport UK NCR 2026 Ch.7 App.8).",
+      },
+    },
   },
   onViolation: {},
   powerToWeight: {

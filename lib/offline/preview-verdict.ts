@@ -1,5 +1,5 @@
 import { displayUnits } from "../scrutineer/display-units";
-import { entryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
+import { storedEntryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
 import { evaluateEntry } from "../scrutineer/evaluate-entry";
 import type { TechRecord } from "../scrutineer/record-schema";
 import type { RuleSet } from "../scrutineer/rule-set-schema";
@@ -16,7 +16,7 @@ export function previewVerdict(opts: {
   eventDate: string;
   unitSystem: "mm" | "in";
 }): Verdict | null {
-  const declarations = entryDeclarationsSchema.safeParse(opts.entry.declarations);
+  const declarations = storedEntryDeclarationsSchema.safeParse(opts.entry.declarations);
   if (!declarations.success) return null;
   if (!opts.ruleSet.classes.some((c) => c.id === opts.entry.declaredClassId)) return null;
   return evaluateEntry({

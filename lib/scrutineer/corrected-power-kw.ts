@@ -2,6 +2,7 @@ import { addYearsToDate } from "./add-years-to-date";
 import { convertPower } from "./convert-power";
 import { convertPressure } from "./convert-pressure";
 import { convertTemperature } from "./convert-temperature";
+import { dynoAmbientProblem } from "./dyno-ambient-problem";
 import { dynoCorrectionFactor } from "./dyno-correction-factor";
 import { CORRECTION_NAMES } from "./dyno-correction-standards";
 import type { DynoSheet } from "./entry-declarations-schema";
@@ -27,8 +28,9 @@ export type CorrectedPower =
  * Brings a declared dyno figure to the basis the rule set asks for: the required correction
  * standard (re-correcting through observed power with the sheet's pressure and temperature when
  * the sheet used another), and wheel or crank power (only when the rule gives a conversion factor).
- * A sheet dated after the event day, or older than the rule's validity on the event date, is not
- * accepted.
+ * A sheet dated after the event day, older than the rule's validity on the event date, or whose
+ * printed pressures cannot be true ({@link dynoAmbientProblem}: a sheet saved before they were
+ * checked) is not accepted, with the reason in words; this never throws.
  * @param eventDate ISO date of the event (venue-local)
  */
 export function correctedPowerKw(
@@ -56,6 +58,13 @@ export function correctedPowerKw(
       reason: `the dyno sheet dated ${sheet.date} is older than ${rule.dynoSheetValidYears} years; a current sheet is needed`,
     };
   }
+  const refuse = (problem: string): CorrectedPower => ({
+    ok: false,
+    missing: ["a dyno sheet whose figures can be true"],
+    reason: `the dyno sheet cannot be true: ${problem}; it is not accepted — check the figures on the sheet`,
+  });
+  const ambientProblem = sheet.ambient === null ? null : dynoAmbientProblem(sheet.ambient);
+  if (ambientProblem !== null) return refuse(ambientProblem);
   const sheetKw = convertPower(sheet.power.value, sheet.power.unit, "kW");
   let powerKw = sheetKw;
   let correctionMultiplier: number | null = null;
@@ -78,13 +87,17 @@ export function correctedPowerKw(
       dryAirPressureKpa,
       temperatureC: convertTemperature(temperature.value, temperature.unit, "C"),
     };
-    const observed =
+    const fromSheet =
       sheet.correction === "uncorrected"
-        ? powerKw
-        : powerKw / dynoCorrectionFactor(sheet.correction, conditions);
-    const factor =
-      rule.correction === "uncorrected" ? 1 : dynoCorrectionFactor(rule.correction, conditions);
-    powerKw = observed * factor;
+        ? ({ ok: true, factor: 1 } as const)
+        : dynoCorrectionFactor(sheet.correction, conditions);
+    if (!fromSheet.ok) return refuse(fromSheet.problem);
+    const toRule =
+      rule.correction === "uncorrected"
+        ? ({ ok: true, factor: 1 } as const)
+        : dynoCorrectionFactor(rule.correction, conditions);
+    if (!toRule.ok) return refuse(toRule.problem);
+    powerKw = (powerKw / fromSheet.factor) * toRule.factor;
     correctionMultiplier = powerKw / sheetKw;
   }
   if (sheet.measuredAt !== rule.powerMeasuredAt) {

@@ -6,7 +6,9 @@ import type { ClassCheckContext } from "./class-check-context";
 import { deriveAeroGeometry } from "./derive-aero-geometry";
 import type { EvaluateEntryInput } from "./evaluate-entry-input-schema";
 import { finishRuleReasons, finishStandaloneReason } from "./finish-rule-reasons";
+import { implausibleReading } from "./implausible-reading";
 import { powerToWeightFigure } from "./power-to-weight-figure";
+import { readingContext } from "./reading-context";
 import type { LengthDimension } from "./record-schema";
 import { resolveRecords } from "./resolve-records";
 import { settleVerdict } from "./settle-verdict";
@@ -50,6 +52,22 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
   const flags = new Set<VerdictFlag>(resolved.flags);
   const { dimensions, setAside } = summariseDimensions(resolved.readings, ruleSet);
   if (setAside.length > 0) flags.add("conditions-mismatch");
+
+  // Readings that cannot plausibly be true stay in the verdict as saved, but the chief scrutineer
+  // is told which and why.
+  const context = readingContext(resolved.readings);
+  const implausibleReadings = resolved.readings.flatMap((r) => {
+    const why = implausibleReading({
+      reading: r.payload,
+      ruleSet,
+      context,
+      unitSystem: display.length,
+    });
+    if (why === null) return [];
+    const corner = "corner" in r.payload ? r.payload.corner : null;
+    return [{ recordId: r.id, dimension: r.payload.dimension, corner, why }];
+  });
+  if (implausibleReadings.length > 0) flags.add("implausible-reading");
 
   const declarations = entry.declarations;
   const ctx: ClassCheckContext = {
@@ -141,6 +159,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     dimensions: summaries,
     setAside,
     missing,
+    implausibleReadings,
     records: resolved.counts,
     display,
     notice: VERDICT_NOTICE,

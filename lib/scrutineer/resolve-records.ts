@@ -1,4 +1,5 @@
 import type { TechRecord, TechRecordOf } from "./record-schema";
+import { resolveVoids } from "./resolve-voids";
 import { stableStringify } from "./stable-stringify";
 import type { VerdictFlag } from "./verdict-schema";
 
@@ -28,9 +29,10 @@ function isLater(a: TechRecord, b: TechRecord): boolean {
 /**
  * Applies the record rules so that the verdict depends on the set of records, never on their
  * order: records of other entries are ignored; a record sent twice counts once (if two copies
- * differ, one is chosen by content and the verdict is flagged); a void cancels its target unless
- * it is itself voided (so a void can be undone by voiding it); voids that form a cycle are ignored
- * and flagged; for a checklist item and for overrides, the latest by device time wins.
+ * differ, one is chosen by content and the verdict is flagged); voids follow the one void rule,
+ * {@link resolveVoids} (a void cancels its target unless it is itself voided, so a void can be
+ * undone by voiding it; voids that form a cycle are ignored and flagged); for a checklist item and
+ * for overrides, the latest by device time wins. Linear in the number of records.
  */
 export function resolveRecords(
   records: ReadonlyArray<TechRecord>,
@@ -66,40 +68,9 @@ export function resolveRecords(
   }
   unique.sort(byId);
 
-  const voidsByTarget = new Map<string, TechRecordOf<"void">[]>();
-  for (const r of unique) {
-    if (r.kind !== "void") continue;
-    const list = voidsByTarget.get(r.payload.targetRecordId);
-    if (list) list.push(r);
-    else voidsByTarget.set(r.payload.targetRecordId, [r]);
-  }
-  // Voids whose chain of targets loops back on itself have no effect.
-  const voidTarget = new Map<string, string>();
-  for (const r of unique) if (r.kind === "void") voidTarget.set(r.id, r.payload.targetRecordId);
-  const inCycle = new Set<string>();
-  for (const start of voidTarget.keys()) {
-    const path: string[] = [];
-    let at: string | undefined = start;
-    for (let step = 0; at !== undefined && step <= voidTarget.size; step += 1) {
-      const seenAt = path.indexOf(at);
-      if (seenAt >= 0) {
-        for (const id of path.slice(seenAt)) inCycle.add(id);
-        break;
-      }
-      path.push(at);
-      at = voidTarget.get(at);
-    }
-  }
+  const { voided: voidedIds, inCycle } = resolveVoids(unique);
   if (inCycle.size > 0) flags.add("void-cycle");
-  const memo = new Map<string, boolean>();
-  const isVoided = (id: string): boolean => {
-    const known = memo.get(id);
-    if (known !== undefined) return known;
-    memo.set(id, false); // cycles are excluded below, so this guard is never read
-    const voided = (voidsByTarget.get(id) ?? []).some((v) => !inCycle.has(v.id) && !isVoided(v.id));
-    memo.set(id, voided);
-    return voided;
-  };
+  const isVoided = (id: string): boolean => voidedIds.has(id);
 
   const readings: TechRecordOf<"reading">[] = [];
   const checklist = new Map<string, TechRecordOf<"checklist">>();

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { classRulesSchema } from "./class-rules-schema";
 import { POWER_TO_WEIGHT_UNITS } from "./convert-power-to-weight";
+import { LENGTH_DIMENSIONS } from "./record-schema";
 import { CLASS_RULE_IDS } from "./rule-ids";
 import { POLICY_LABEL_FORMS, safetyRulesSchema } from "./safety-rules-schema";
 
@@ -27,6 +28,27 @@ const conditionsSchema = z.object({
     .default(null),
   notes: z.string().optional(),
 });
+
+/** The dimensions a reading can carry, for per-dimension data in a rule set. */
+const READING_DIMENSIONS = [...LENGTH_DIMENSIONS, "cornerWeightKg", "noiseDbA"] as const;
+
+/**
+ * What a reading of each dimension can plausibly be on a car at the tech line, in the
+ * dimension's unit (mm, kg, dB(A)), with where the range comes from. A reading outside it is
+ * kept as saved but marked for the chief scrutineer (`implausibleReading`). Optional: rule sets
+ * stored before it existed stay valid, and where a dimension has no range only the hard caps of
+ * `reading-limits.ts` apply.
+ */
+export const plausibleReadingsSchema = z
+  .partialRecord(
+    z.enum(READING_DIMENSIONS),
+    z
+      .object({ min: z.number().finite(), max: z.number().finite(), source: z.string().optional() })
+      .refine((r) => r.min < r.max, {
+        message: "The lowest plausible value is not below the highest",
+      }),
+  )
+  .optional();
 
 const powerToWeightSchema = z.object({
   unit: z.enum(POWER_TO_WEIGHT_UNITS),
@@ -71,6 +93,7 @@ export const ruleSetSchema = z
         bodyWidth: z.string().min(1),
         splitterFront: z.string().min(1),
       }),
+      plausible: plausibleReadingsSchema,
     }),
     /** Which class-rule failures move a car up and which stop it; unlisted rules move up. */
     onViolation: z.partialRecord(z.enum(CLASS_RULE_IDS), z.enum(["move-up", "stop"])).default({}),

@@ -20,6 +20,8 @@ export const VERDICT_FLAGS = [
   "void-cycle",
   "override-invalid",
   "unknown-checklist-item",
+  "implausible-reading",
+  "not-computed",
 ] as const;
 /** One of {@link VERDICT_FLAGS}. */
 export type VerdictFlag = (typeof VERDICT_FLAGS)[number];
@@ -207,6 +209,18 @@ export const verdictSchema = z.object({
     }),
   ),
   missing: z.array(z.string()),
+  /** Readings outside what a car can measure, kept as saved and marked for the chief scrutineer,
+   * each with why in words. Absent in verdicts stored before it existed. */
+  implausibleReadings: z
+    .array(
+      z.object({
+        recordId: z.string(),
+        dimension,
+        corner: z.enum(CORNERS).nullable(),
+        why: z.string(),
+      }),
+    )
+    .default([]),
   records: z.object({
     total: z.number().int(),
     used: z.number().int(),

@@ -2,18 +2,27 @@ import type { VerdictFlag, VerdictStatus } from "../scrutineer/verdict-schema";
 
 /**
  * Why a car waits for the chief scrutineer, in words a person can act on, most pressing first:
- * an override that was not applied, readings that disagree, a reading too close to call, voids
- * that cancel each other, an answer for an item the rules lack, copies of a record that differ,
- * a held car, or a re-measure still owed. Empty when nothing asks for the chief.
+ * a verdict the server could not compute, an override that was not applied, readings that
+ * disagree, a reading that cannot plausibly be true, a reading too close to call, voids that
+ * cancel each other, an answer for an item the rules lack, copies of a record that differ, a held
+ * car, or a re-measure still owed. Empty when nothing asks for the chief.
  * @param rejectedOverride the override the engine could not apply: who and when, and why not
+ * @param implausibleReadings why each implausible reading cannot be true (the verdict's
+ *   `implausibleReadings[].why`); without them the flag is named in general words
  */
 export function chiefAttention(verdict: {
   status: VerdictStatus;
   flags: ReadonlyArray<string>;
   rejectedOverride: { whoAndWhen: string; problem: string } | null;
+  implausibleReadings?: ReadonlyArray<string>;
 }): string[] {
   const has = (flag: VerdictFlag) => verdict.flags.includes(flag);
   const words: string[] = [];
+  if (has("not-computed")) {
+    words.push(
+      "The server could not compute this car's verdict: it waits until you decide. Tell the organizer so the fault is fixed.",
+    );
+  }
   if (has("override-invalid")) {
     words.push(
       verdict.rejectedOverride
@@ -25,6 +34,17 @@ export function chiefAttention(verdict: {
     words.push(
       "Readings disagree: two officials' readings differ by more than their combined uncertainty. Void the one you reject, or have the car re-measured.",
     );
+  }
+  if (has("implausible-reading")) {
+    const why = verdict.implausibleReadings ?? [];
+    if (why.length === 0) {
+      words.push(
+        "Check this reading: one of this car's readings is outside what a car at the tech line measures. Open the car card, then void it or have the car re-measured.",
+      );
+    }
+    for (const w of why) {
+      words.push(`Check this reading: ${w}. Void it or have the car re-measured.`);
+    }
   }
   if (has("inconclusive")) {
     words.push(

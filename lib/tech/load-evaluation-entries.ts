@@ -3,7 +3,7 @@ import type { EventRuleContext } from "../../db/queries/get-event-rule-set";
 import { listEntriesForEvaluation } from "../../db/queries/list-entries-for-evaluation";
 import { listEntryRecords } from "../../db/queries/list-entry-records";
 import { displayUnits } from "../scrutineer/display-units";
-import { entryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
+import { storedEntryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
 import type { ReEvaluationEntry } from "../scrutineer/re-evaluate-entries";
 import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 
@@ -32,7 +32,7 @@ export async function loadEvaluationEntries({
     entry: {
       entryId: entry.entryId,
       declaredClassId: entry.declaredClassId,
-      declarations: entryDeclarationsSchema.parse(entry.declarations),
+      declarations: storedEntryDeclarationsSchema.parse(entry.declarations),
     },
     records: byEntry.get(entry.entryId) ?? [],
     eventDate: context.eventDate,

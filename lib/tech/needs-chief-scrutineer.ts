@@ -2,8 +2,9 @@ import type { Verdict } from "../scrutineer/verdict-schema";
 
 /**
  * Whether a verdict waits for the chief scrutineer: readings that disagree beyond their combined
- * uncertainty, an override that no longer fits the rule set, or a checklist answer for an item the
- * rule set does not have. Code surfaces these; it does not resolve them.
+ * uncertainty, an override that no longer fits the rule set, a checklist answer for an item the
+ * rule set does not have, voids in a loop, a reading outside what a car can measure, or a verdict
+ * the server could not compute. Code surfaces these; it does not resolve them.
  */
 export function needsChiefScrutineer(verdict: Pick<Verdict, "flags">): boolean {
   return verdict.flags.some(
@@ -11,6 +12,8 @@ export function needsChiefScrutineer(verdict: Pick<Verdict, "flags">): boolean {
       f === "disagreement" ||
       f === "override-invalid" ||
       f === "unknown-checklist-item" ||
-      f === "void-cycle",
+      f === "void-cycle" ||
+      f === "implausible-reading" ||
+      f === "not-computed",
   );
 }

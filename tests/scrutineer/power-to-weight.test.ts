@@ -13,34 +13,36 @@ import { clubRuleSet, input, reading } from "./fixtures";
 const LB = 0.45359237; // Source: NIST SP 811 App. B.8 — 1 lb = 0.45359237 kg exactly
 const HP_KW = 0.74569987158227; // Source: NIST SP 811 App. B.8 — 1 hp = 745.69987158227 W
 
+/** The factor, for conditions a correction can use. */
+function cf(...args: Parameters<typeof dynoCorrectionFactor>): number {
+  const result = dynoCorrectionFactor(...args);
+  if (!result.ok) throw new Error(result.problem);
+  return result.factor;
+}
+
 describe("dyno correction factors", () => {
   it("SAE J1349 is exactly 1 at its reference, 990 mbar dry air and 25 °C", () => {
     // Source: SAE J1349 JUN90 as quoted in dyno literature — CF = 1.18 × (990/Pd) × √((T + 273)/298) − 0.18
-    expect(
-      dynoCorrectionFactor("sae-j1349", { dryAirPressureKpa: 99, temperatureC: 25 }),
-    ).toBeCloseTo(1, 12);
+    expect(cf("sae-j1349", { dryAirPressureKpa: 99, temperatureC: 25 })).toBeCloseTo(1, 12);
   });
 
   it("SAE J1349 at 950 mbar and 35 °C (worked here)", () => {
     // Worked here: 990/950 = 1.0421053; √(308/298) = 1.0166401; 1.18 × 1.0421053 × 1.0166401 = 1.2501463;
     // − 0.18 = 1.0701463. Source: SAE J1349 JUN90 formula as quoted in dyno literature
-    expect(
-      dynoCorrectionFactor("sae-j1349", { dryAirPressureKpa: 95, temperatureC: 35 }),
-    ).toBeCloseTo(1.0701463, 6);
+    expect(cf("sae-j1349", { dryAirPressureKpa: 95, temperatureC: 35 })).toBeCloseTo(1.0701463, 6);
   });
 
   it("the older STD correction is 1 at 29.92 inHg and 60 °F and reads about 4 % above J1349", () => {
     // Source: DOMAIN.md citing SAE J1349 JUN90 as quoted in dyno literature — STD reference 29.92 inHg, 60 °F
     const stdRef = { dryAirPressureKpa: 29.92 * 3.386389, temperatureC: (60 - 32) / 1.8 }; // Source: NIST SP 811 App. B.8 — inHg and °F
-    expect(dynoCorrectionFactor("std", stdRef)).toBeCloseTo(1, 12);
+    expect(cf("std", stdRef)).toBeCloseTo(1, 12);
     // Source: DOMAIN.md citing dyno literature — STD "reads about 4 % higher" than J1349
     for (const conditions of [
       { dryAirPressureKpa: 99, temperatureC: 25 },
       { dryAirPressureKpa: 100, temperatureC: 18 },
       { dryAirPressureKpa: 97, temperatureC: 30 },
     ]) {
-      const ratio =
-        dynoCorrectionFactor("std", conditions) / dynoCorrectionFactor("sae-j1349", conditions);
+      const ratio = cf("std", conditions) / cf("sae-j1349", conditions);
       expect(ratio).toBeGreaterThan(1.03);
       expect(ratio).toBeLessThan(1.05);
     }
@@ -81,8 +83,7 @@ describe("correctedPowerKw", () => {
   it("re-corrects an STD figure to J1349 through observed power", () => {
     const p = correctedPowerKw(sheet({ correction: "std" }), ptwRule(), "2026-05-16");
     const cond = { dryAirPressureKpa: 95, temperatureC: 35 };
-    const expected =
-      ((200 * HP_KW) / dynoCorrectionFactor("std", cond)) * dynoCorrectionFactor("sae-j1349", cond);
+    const expected = ((200 * HP_KW) / cf("std", cond)) * cf("sae-j1349", cond);
     expect(p.ok && p.powerKw).toBeCloseTo(expected, 9);
     expect(p.ok && p.powerKw).toBeLessThan(200 * HP_KW); // Source: DOMAIN.md — STD reads higher, so J1349 is lower
   });

@@ -24,7 +24,7 @@ describe("recordRefusal", () => {
         record: voidOf(target),
         userId: "sam",
         roles: ["scrutineer"],
-        target: { entryId: "car-37", officialId: "sam" },
+        target: { kind: "reading", entryId: "car-37", officialId: "sam" },
       }),
     ).toBeNull();
   });
@@ -34,7 +34,7 @@ describe("recordRefusal", () => {
       record: voidOf(target),
       userId: "sam",
       roles: ["scrutineer"],
-      target: { entryId: "car-37", officialId: "alex" },
+      target: { kind: "reading", entryId: "car-37", officialId: "alex" },
     });
     expect(reason).toMatch(/only your own records/);
     expect(reason).toMatch(/chief scrutineer/);
@@ -49,7 +49,7 @@ describe("recordRefusal", () => {
         record: voidOf(target),
         userId: "sam",
         roles: ["scrutineer"],
-        target: { entryId: "car-12", officialId: "sam" },
+        target: { kind: "reading", entryId: "car-12", officialId: "sam" },
       }),
     ).toMatch(/another car/);
   });
@@ -60,7 +60,28 @@ describe("recordRefusal", () => {
         record: voidOf(target, "chief"),
         userId: "chief",
         roles: ["chief-scrutineer"],
-        target: { entryId: "car-37", officialId: "alex" },
+        target: { kind: "reading", entryId: "car-37", officialId: "alex" },
+      }),
+    ).toBeNull();
+  });
+
+  it("lets only the chief scrutineer void a void, even the scrutineer's own void", () => {
+    // A void of a void undoes the first void; undoing is the chief's call, never a scrutineer's.
+    const ownVoid = { kind: "void" as const, entryId: "car-37", officialId: "sam" };
+    expect(
+      recordRefusal({
+        record: voidOf(target),
+        userId: "sam",
+        roles: ["scrutineer"],
+        target: ownVoid,
+      }),
+    ).toMatch(/Only the chief scrutineer can undo a void/);
+    expect(
+      recordRefusal({
+        record: voidOf(target, "chief"),
+        userId: "chief",
+        roles: ["chief-scrutineer"],
+        target: ownVoid,
       }),
     ).toBeNull();
   });
@@ -71,7 +92,7 @@ describe("recordRefusal", () => {
         record: voidOf(target, "clerk"),
         userId: "clerk",
         roles: ["clerk-of-course"],
-        target: { entryId: "car-37", officialId: "clerk" },
+        target: { kind: "reading", entryId: "car-37", officialId: "clerk" },
       }),
     ).toBe("Your role in this event cannot void records.");
     expect(
