@@ -4,7 +4,8 @@ import type { VerdictFlag, VerdictStatus } from "../scrutineer/verdict-schema";
  * Why a car waits for the chief scrutineer, in words a person can act on, most pressing first:
  * an override that was not applied, readings that disagree, a reading too close to call, voids
  * that cancel each other, an answer for an item the rules lack, copies of a record that differ,
- * a held car, or a re-measure still owed. Empty when nothing asks for the chief.
+ * a held car, or a re-measure still owed. Empty when nothing asks for the chief, and when the
+ * chief's own override stands (flag "overridden"): their decision settles the car.
  * @param rejectedOverride the override the engine could not apply: who and when, and why not
  */
 export function chiefAttention(verdict: {
@@ -13,6 +14,7 @@ export function chiefAttention(verdict: {
   rejectedOverride: { whoAndWhen: string; problem: string } | null;
 }): string[] {
   const has = (flag: VerdictFlag) => verdict.flags.includes(flag);
+  if (has("overridden")) return [];
   const words: string[] = [];
   if (has("override-invalid")) {
     words.push(
