@@ -1,5 +1,6 @@
 import "server-only";
 import { v7 as uuidv7 } from "uuid";
+import { clock } from "../../lib/clock";
 import { getDb } from "../client";
 import { uploads } from "../schema";
 
@@ -18,5 +19,5 @@ export async function recordUpload(row: {
   await getDb()
     .insert(uploads)
     .ignore()
-    .values({ id: uuidv7(), kind: "photo", ...row, createdAt: new Date() });
+    .values({ id: uuidv7(), kind: "photo", ...row, createdAt: clock.now() });
 }

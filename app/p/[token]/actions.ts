@@ -3,6 +3,7 @@ import { revalidatePath } from "next/cache";
 import type { RevokePassState } from "@/components/pass-revoke-form";
 import { revokePass } from "@/db/queries/revoke-pass";
 import { requirePermission } from "@/lib/auth/require-permission";
+import { clock } from "@/lib/clock";
 import { AppError } from "@/lib/errors";
 import { zodFieldErrors } from "@/lib/http/zod-field-errors";
 import { revokePassInputSchema } from "@/lib/passes/revoke-pass-input-schema";
@@ -26,7 +27,7 @@ export async function revokePassAction(
   }
   const { token, reason } = input.data;
   // The pass id and event come from the signed pass (or the key's row), never from the form.
-  const { eventId, result } = await verifyPassOnServer({ token, now: new Date() });
+  const { eventId, result } = await verifyPassOnServer({ token, now: clock.now() });
   const passId = result.ok ? result.claims.jti : result.claims?.jti;
   if (!eventId || !passId) {
     return { status: "error", message: "Only a pass Plumbline issued can be revoked." };

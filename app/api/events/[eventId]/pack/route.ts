@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { requirePermission } from "@/lib/auth/require-permission";
+import { clock } from "@/lib/clock";
 import { handleRoute } from "@/lib/http/handle-route";
 import { idSchema } from "@/lib/http/id-schema";
 import { buildEventPack } from "@/lib/tech/build-event-pack";
@@ -18,7 +19,7 @@ export const GET = handleRoute(async (request: Request, { params }: Context) => 
   const pack = await buildEventPack({
     eventId,
     since: since ? new Date(since) : null,
-    now: new Date(),
+    now: clock.now(),
   });
   const headers = { etag: pack.etag, "cache-control": "private, no-cache" };
   if (request.headers.get("if-none-match") === pack.etag)

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { requirePermission } from "@/lib/auth/require-permission";
+import { clock } from "@/lib/clock";
 import { handleRoute, parseJsonBody } from "@/lib/http/handle-route";
 import { idSchema } from "@/lib/http/id-schema";
 import { syncRecords } from "@/lib/tech/sync-records";
@@ -18,7 +19,7 @@ export const POST = handleRoute(async (request: Request, { params }: Context) =>
     user,
     roles,
     rawRecords: body.records,
-    now: new Date(),
+    now: clock.now(),
   });
   return NextResponse.json(response, { headers: { "cache-control": "no-store" } });
 });
