@@ -81,6 +81,23 @@ test("the chief scrutineer's queue opens each car; an override is checked, kept 
   );
   await page.screenshot({ path: testInfo.outputPath("car-card-decided.png"), fullPage: true });
 
+  // The decision settles the car: it leaves "cars wait for you" for "Decided by the chief
+  // scrutineer", with who and when, and stays there on a reload.
+  await page.goto(`/tech/${eventId}/chief`);
+  for (let load = 0; load < 2; load += 1) {
+    if (load > 0) await page.reload();
+    const row = (id: string) =>
+      page.getByTestId(id).locator(`[data-testid=chief-queue-row][data-car-number="${carNumber}"]`);
+    await expect(row("chief-queue")).toHaveCount(0);
+    await expect(row("chief-decided")).toBeVisible();
+    await expect(row("chief-decided").getByTestId("chief-decided-by")).toHaveText(
+      new RegExp(`^Decided by ${session.user.name} at \\d\\d:\\d\\d on \\w{3} \\d{1,2} \\w{3}$`),
+    );
+    await expect(row("chief-decided")).not.toContainText("Too close to call");
+    await expect(page.getByText("No overrides yet.")).toHaveCount(0);
+  }
+  await page.screenshot({ path: testInfo.outputPath("chief-page-decided.png"), fullPage: true });
+
   // The entry page shows the same: the decision, by name.
   await page.goto(`/entries/${entryId}`);
   await expect(page.getByTestId("entry-result-reason")).toContainText(

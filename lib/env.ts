@@ -33,6 +33,12 @@ const envSchema = z
     S3_BUCKET: z.string().default("plumbline-uploads"),
     S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
     S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+    /** Demo and tests only (refused unless PLUMBLINE_MODE=demo): the server's clock starts at
+     *  this instant, ISO 8601 with a zone ("2031-06-02T09:00:00Z"), and runs on (lib/clock.ts). */
+    PLUMBLINE_FAKE_NOW: z.preprocess(
+      (v) => (v === "" ? undefined : v),
+      z.iso.datetime({ offset: true }).optional(),
+    ),
   })
   .superRefine((env, ctx) => {
     if (env.PLUMBLINE_MODE === "live" && env.AUTH_SECRET === DEMO_AUTH_SECRET) {
@@ -40,6 +46,14 @@ const envSchema = z
         code: "custom",
         path: ["AUTH_SECRET"],
         message: "set a real AUTH_SECRET in live mode",
+      });
+    }
+    if (env.PLUMBLINE_FAKE_NOW !== undefined && env.PLUMBLINE_MODE !== "demo") {
+      ctx.addIssue({
+        code: "custom",
+        path: ["PLUMBLINE_FAKE_NOW"],
+        message:
+          "a fake clock is for the demo and the tests only: unset it, or set PLUMBLINE_MODE=demo",
       });
     }
   });

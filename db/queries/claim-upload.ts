@@ -1,3 +1,4 @@
+import { clock } from "../../lib/clock";
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { v7 as uuidv7 } from "uuid";
@@ -30,7 +31,7 @@ export async function claimUpload(row: {
   const [result] = await db
     .insert(uploads)
     .ignore()
-    .values({ id: uuidv7(), kind: "photo", ...row, createdAt: new Date() });
+    .values({ id: uuidv7(), kind: "photo", ...row, createdAt: clock.now() });
   if (result.affectedRows === 1) return { status: "new" };
   const [existing] = await db
     .select({ uploadedBy: uploads.uploadedBy, sha256: uploads.sha256 })

@@ -2,6 +2,7 @@ import "server-only";
 import { v7 as uuidv7 } from "uuid";
 import type { z } from "zod";
 import type { carInputSchema } from "../../lib/cars/car-schema";
+import { clock } from "../../lib/clock";
 import { getDb } from "../client";
 import { auditLog, cars } from "../schema";
 
@@ -14,7 +15,7 @@ export async function createCar({
   car: z.output<typeof carInputSchema>;
 }): Promise<{ id: string }> {
   const id = uuidv7();
-  const now = new Date();
+  const now = clock.now();
   await getDb().transaction(async (tx) => {
     await tx
       .insert(cars)

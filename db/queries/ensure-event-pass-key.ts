@@ -1,5 +1,6 @@
 import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
+import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
 import { generateEventKey } from "../../lib/passes/generate-event-key";
 import { type Db, getDb } from "../client";
@@ -53,7 +54,7 @@ export async function ensureEventPassKey({
     const made = await currentKey(tx, eventId, true);
     if (made) return made;
     const key = generateEventKey();
-    const now = new Date();
+    const now = clock.now();
     await tx.insert(eventPassKeys).values({ ...key, eventId, createdAt: now });
     await tx.insert(auditLog).values({
       eventId,

@@ -1,6 +1,7 @@
 import "server-only";
 import { eq, max } from "drizzle-orm";
 import { v7 as uuidv7 } from "uuid";
+import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
 import type { RuleSet } from "../../lib/scrutineer/rule-set-schema";
 import { getDb } from "../client";
@@ -17,7 +18,7 @@ export async function insertRuleSetVersion({
   ruleSet,
   notes,
   createdBy,
-  now = new Date(),
+  now = clock.now(),
 }: {
   eventId: string;
   ruleSet: RuleSet;

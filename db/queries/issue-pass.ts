@@ -1,6 +1,7 @@
 import "server-only";
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { v7 as uuidv7 } from "uuid";
+import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
 import { parseCompactJws } from "../../lib/passes/parse-compact-jws";
 import { passBlockers } from "../../lib/passes/pass-blockers";
@@ -47,7 +48,7 @@ function storedClaims(token: string): PassClaims | null {
 export async function issuePass({
   entryId,
   actorId,
-  now = new Date(),
+  now = clock.now(),
 }: {
   entryId: string;
   actorId: string | null;

@@ -1,11 +1,12 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import type { Verdict } from "../../lib/scrutineer/verdict-schema";
+import { parseStoredVerdict } from "../../lib/entries/parse-stored-verdict";
 import { toPackVerdict } from "../../lib/tech/to-pack-verdict";
 import { getDb } from "../client";
 import { verdicts } from "../schema";
 
-/** The stored verdicts of an event, in the short form phones and boards use. */
+/** The stored verdicts of an event, in the short form phones and boards use. A row whose JSON
+ *  does not read as a verdict is left out (no verdict: the car shows as Waiting) and logged. */
 export async function listEventVerdicts({ eventId }: { eventId: string }) {
   const rows = await getDb()
     .select({
@@ -18,19 +19,15 @@ export async function listEventVerdicts({ eventId }: { eventId: string }) {
     })
     .from(verdicts)
     .where(eq(verdicts.eventId, eventId));
-  return rows.map((r) => {
-    const result = (r.result ?? {}) as Partial<Verdict>;
-    return toPackVerdict({
-      entryId: r.entryId,
-      verdict: {
-        status: r.status,
-        classId: r.classId,
-        reason: r.reason,
-        flags: (result.flags ?? []).filter((f) => typeof f === "string"),
-        override: result.override ?? null,
-        rejectedOverride: result.rejectedOverride ?? null,
-      },
-      computedAt: r.computedAt,
-    });
+  return rows.flatMap((r) => {
+    const verdict = parseStoredVerdict({ entryId: r.entryId, result: r.result });
+    if (!verdict) return [];
+    return [
+      toPackVerdict({
+        entryId: r.entryId,
+        verdict: { ...verdict, status: r.status, classId: r.classId, reason: r.reason },
+        computedAt: r.computedAt,
+      }),
+    ];
   });
 }

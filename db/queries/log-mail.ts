@@ -1,4 +1,5 @@
 import "server-only";
+import { clock } from "../../lib/clock";
 import { getDb } from "../client";
 import { mailLog } from "../schema";
 
@@ -14,5 +15,5 @@ export async function logMail(row: {
 }): Promise<void> {
   await getDb()
     .insert(mailLog)
-    .values({ ...row, error: row.error?.slice(0, 500) ?? null, createdAt: new Date() });
+    .values({ ...row, error: row.error?.slice(0, 500) ?? null, createdAt: clock.now() });
 }

@@ -1,5 +1,6 @@
 import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
+import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
 import { getDb } from "../client";
 import { auditLog, events, ruleSetVersions } from "../schema";
@@ -14,7 +15,7 @@ export async function pinRuleSetVersion({
   eventId,
   versionId,
   pinnedBy,
-  now = new Date(),
+  now = clock.now(),
 }: {
   eventId: string;
   versionId: string;

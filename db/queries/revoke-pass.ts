@@ -1,5 +1,6 @@
 import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
+import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
 import { getDb } from "../client";
 import { auditLog, passes } from "../schema";
@@ -15,7 +16,7 @@ export async function revokePass({
   passId,
   reason,
   revokedBy,
-  now = new Date(),
+  now = clock.now(),
 }: {
   eventId: string;
   passId: string;

@@ -7,9 +7,9 @@ import type { SessionUser } from "../auth/get-session-user";
 import { can } from "../auth/permissions";
 import { AppError } from "../errors";
 import { classNamesFromRuleSet } from "../passes/class-names-from-rule-set";
-import type { Verdict } from "../scrutineer/verdict-schema";
 import { formatWhoAndWhen } from "../tech/format-who-and-when";
 import type { EntryResult } from "./entry-result";
+import { parseStoredVerdict } from "./parse-stored-verdict";
 
 /**
  * An entry's result for a person allowed to see it: its driver, co-driver or car owner, or an
@@ -31,7 +31,8 @@ export async function loadEntryResult({
   if (!(own && can(roles, "own-entries.read")) && !can(roles, "entries.read")) {
     throw new AppError("forbidden", "This entry is not yours to see.");
   }
-  const verdict = (row.result ?? null) as Verdict | null;
+  // A stored verdict that does not read as one counts as none: the car shows as Waiting.
+  const verdict = parseStoredVerdict({ entryId: row.entryId, result: row.result });
   const names = classNamesFromRuleSet(row.ruleSetBody);
   const className = (id: string | null) => (id ? (names[id] ?? id) : null);
   const order: Record<string, number> = {
@@ -65,9 +66,11 @@ export async function loadEntryResult({
     car: `${row.year} ${row.make} ${row.model}`,
     drivers: [row.driverName, row.coDriverName].filter(Boolean).join(" & "),
     declaredClass: className(row.declaredClass) ?? row.declaredClass,
-    status: row.status ?? "waiting",
-    className: className(row.finalClass),
-    reason: row.reason ?? "Not scrutineered yet. Bring the car and your pass to the tech line.",
+    status: verdict ? (row.status ?? "waiting") : "waiting",
+    className: verdict ? className(row.finalClass) : null,
+    reason:
+      (verdict ? row.reason : null) ??
+      "Not scrutineered yet. Bring the car and your pass to the tech line.",
     decidedBy: override
       ? formatWhoAndWhen({
           name: decider ? (decider.name ?? decider.email) : null,
@@ -77,6 +80,6 @@ export async function loadEntryResult({
       : null,
     lines,
     notice: verdict?.notice ?? null,
-    computedAt: row.computedAt ? row.computedAt.toISOString() : null,
+    computedAt: verdict && row.computedAt ? row.computedAt.toISOString() : null,
   };
 }

@@ -4,6 +4,7 @@ import { type EntryForPass, getEntryForPass } from "../../db/queries/get-entry-f
 import { isOwnEntry } from "../../db/queries/is-own-entry";
 import { type IssuedPass, issuePass } from "../../db/queries/issue-pass";
 import { requirePagePermission, requirePageUser } from "../auth/require-page-permission";
+import { clock } from "../clock";
 import { env } from "../env";
 import { idSchema } from "../http/id-schema";
 import { passBlockers } from "./pass-blockers";
@@ -37,7 +38,7 @@ export async function loadOwnPassPage({
   await requirePagePermission({ eventId: entry.eventId, permission: "own-entries.read", returnTo });
   if (!(await isOwnEntry({ entryId, userId: user.id }))) forbidden();
 
-  const now = new Date();
+  const now = clock.now();
   const window = passValidityWindow({
     issuedAt: now,
     eventDate: entry.eventDate,

@@ -2,6 +2,7 @@ import "server-only";
 import { countDeclaredClasses } from "../../db/queries/count-declared-classes";
 import { getRuleSetVersion } from "../../db/queries/get-rule-set-version";
 import { pinRuleSetVersion } from "../../db/queries/pin-rule-set-version";
+import { clock } from "../clock";
 import { AppError } from "../errors";
 import { ruleSetSchema } from "../scrutineer/rule-set-schema";
 import { notifyVerdictChanges } from "../tech/notify-verdict-changes";
@@ -17,7 +18,7 @@ export async function pinRuleSet({
   eventId,
   versionId,
   userId,
-  now = new Date(),
+  now = clock.now(),
 }: {
   eventId: string;
   versionId: string;

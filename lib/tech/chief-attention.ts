@@ -5,7 +5,8 @@ import type { VerdictFlag, VerdictStatus } from "../scrutineer/verdict-schema";
  * a verdict the server could not compute, an override that was not applied, readings that
  * disagree, a reading that cannot plausibly be true, a reading too close to call, voids that
  * cancel each other, an answer for an item the rules lack, copies of a record that differ, a held
- * car, or a re-measure still owed. Empty when nothing asks for the chief.
+ * car, or a re-measure still owed. Empty when nothing asks for the chief, and when the chief's
+ * own override stands (flag "overridden"): their decision settles the car.
  * @param rejectedOverride the override the engine could not apply: who and when, and why not
  * @param implausibleReadings why each implausible reading cannot be true (the verdict's
  *   `implausibleReadings[].why`); without them the flag is named in general words
@@ -17,6 +18,7 @@ export function chiefAttention(verdict: {
   implausibleReadings?: ReadonlyArray<string>;
 }): string[] {
   const has = (flag: VerdictFlag) => verdict.flags.includes(flag);
+  if (has("overridden")) return [];
   const words: string[] = [];
   if (has("not-computed")) {
     words.push(

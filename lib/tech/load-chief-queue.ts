@@ -26,6 +26,9 @@ export type ChiefQueueRow = {
  * The chief scrutineer's page: cars that need a decision (readings that disagree, too close to
  * call, an override not applied, held, re-measure) with why in words, and the cars already
  * decided by override with who decided and when (the deciding phone's clock, event time zone).
+ * A car goes by its stored verdict as read through the verdict schema: a standing override
+ * settles it (decided, whatever its readings said), an override that does not fit keeps it
+ * waiting with why, and a verdict that does not read counts as none (neither list).
  */
 export async function loadChiefQueue({
   eventId,
@@ -47,32 +50,32 @@ export async function loadChiefQueue({
   const decided: ChiefQueueRow[] = [];
   for (const e of entries) {
     const v = byEntry.get(e.entryId);
-    const rejected = v?.rejectedOverride ?? null;
-    const attention = v
-      ? chiefAttention({
-          status: v.status,
-          flags: v.flags,
-          rejectedOverride: rejected && {
-            whoAndWhen: whoAndWhen(rejected),
-            problem: rejected.problem,
-          },
-        })
-      : [];
-    const override = v?.override ?? null;
+    if (!v) continue; // no verdict yet, or one that does not read: nothing to decide on
+    const rejected = v.rejectedOverride;
+    const attention = chiefAttention({
+      status: v.status,
+      flags: v.flags,
+      rejectedOverride: rejected && {
+        whoAndWhen: whoAndWhen(rejected),
+        problem: rejected.problem,
+      },
+    });
     const row: ChiefQueueRow = {
       entryId: e.entryId,
       carNumber: e.carNumber,
       car: `${e.year} ${e.make} ${e.model} · ${e.colour}`,
       drivers: [e.driverName, e.coDriverName].filter(Boolean).join(" & "),
       declaredClass: e.declaredClassName,
-      finalClass: e.status === "moved-up" ? e.finalClassName : null,
-      status: e.status,
-      reason: e.reason,
+      finalClass: v.status === "moved-up" ? e.finalClassName : null,
+      status: v.status,
+      reason: v.reason,
       attention,
-      decidedBy: override && whoAndWhen(override),
+      decidedBy: v.override && whoAndWhen(v.override),
     };
-    if (e.needsChief || attention.length > 0) waiting.push(row);
-    else if (override) decided.push(row);
+    // One rule for "waits for the chief" (needsChiefScrutineer, via the pack verdict), and the
+    // words: a standing override settles the car in both.
+    if (v.needsChief || attention.length > 0) waiting.push(row);
+    else if (v.override) decided.push(row);
   }
   return { waiting, decided };
 }

@@ -7,6 +7,7 @@ import { listRecordAuthors } from "../../db/queries/list-record-authors";
 import type { SessionUser } from "../auth/get-session-user";
 import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
+import { MAX_VOIDS_PER_ENTRY } from "../scrutineer/max-voids-per-entry";
 import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 import { describeRecordIssue } from "./describe-record-issue";
 import { deviceTimeProblem } from "./device-time-problem";
@@ -15,13 +16,6 @@ import { recomputeVerdicts } from "./recompute-verdicts";
 import { recordRefusal } from "./record-refusal";
 import type { SyncRecordResult, SyncResponse } from "./sync-schema";
 import { toPackVerdict } from "./to-pack-verdict";
-
-/**
- * Most voids one entry may carry. A car's record is corrected a handful of times on a day; a
- * long chain of voids is a broken or hostile phone, and every one is read again by each
- * evaluation of the entry.
- */
-export const MAX_VOIDS_PER_ENTRY = 200;
 
 /**
  * Accept a batch from a phone's outbox: check every record on its own (shape, who made it, the

@@ -4,6 +4,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PaddockBoard } from "@/components/paddock-board";
 import { getPaddockBoard } from "@/lib/board/get-paddock-board";
+import { clock } from "@/lib/clock";
 import { idSchema } from "@/lib/http/id-schema";
 import { boardKeys } from "@/lib/query/board-queries";
 import { getQueryClient } from "@/lib/query/get-query-client";
@@ -15,7 +16,7 @@ export const metadata: Metadata = { title: "Paddock board" };
 export default async function BoardPage({ params }: { params: Promise<{ eventId: string }> }) {
   const { eventId } = await params;
   if (!idSchema.safeParse(eventId).success) notFound();
-  const board = await getPaddockBoard({ eventId, now: new Date() }).catch(() => null);
+  const board = await getPaddockBoard({ eventId, now: clock.now() }).catch(() => null);
   if (!board) notFound();
   const queryClient = getQueryClient();
   queryClient.setQueryData(boardKeys.event(eventId), board);

@@ -2,6 +2,7 @@
 import { revalidatePath } from "next/cache";
 import type { RevokePassState } from "@/components/pass-revoke-form";
 import { revokePass } from "@/db/queries/revoke-pass";
+import { clock } from "@/lib/clock";
 import { AppError } from "@/lib/errors";
 import { defineAction } from "@/lib/http/define-action";
 import { revokePassInputSchema } from "@/lib/passes/revoke-pass-input-schema";
@@ -9,7 +10,7 @@ import { verifyPassOnServer } from "@/lib/passes/verify-pass-on-server";
 
 /** The pass id and event come from the signed pass (or its key's row), never from the form. */
 async function passOf(token: string): Promise<{ eventId: string; passId: string }> {
-  const { eventId, result } = await verifyPassOnServer({ token, now: new Date() });
+  const { eventId, result } = await verifyPassOnServer({ token, now: clock.now() });
   const passId = result.ok ? result.claims.jti : result.claims?.jti;
   if (!eventId || !passId) {
     throw new AppError("not_found", "Only a pass Plumbline issued can be revoked.");

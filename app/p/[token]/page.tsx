@@ -8,6 +8,7 @@ import { getEntryForPass } from "@/db/queries/get-entry-for-pass";
 import { getEventRoles } from "@/db/queries/get-event-roles";
 import { getSessionUser } from "@/lib/auth/get-session-user";
 import { can } from "@/lib/auth/permissions";
+import { clock } from "@/lib/clock";
 import { formatPassTime } from "@/lib/passes/format-pass-time";
 import { passClassMove } from "@/lib/passes/pass-class-move";
 import { extractPassToken } from "@/lib/passes/pass-url";
@@ -21,7 +22,7 @@ export const metadata: Metadata = { title: "Pass check", robots: { index: false 
 export default async function PassCheckPage({ params }: { params: Promise<{ token: string }> }) {
   const { token: raw } = await params;
   const token = extractPassToken(raw) ?? "";
-  const { eventId, result } = await verifyPassOnServer({ token, now: new Date() });
+  const { eventId, result } = await verifyPassOnServer({ token, now: clock.now() });
   // Present only when the signature checked out (valid, or refused for time/revocation/event).
   const claims = result.claims;
   const [entry, user] = await Promise.all([

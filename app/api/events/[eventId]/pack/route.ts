@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { clock } from "@/lib/clock";
 import { defineRoute } from "@/lib/http/define-route";
 import { eventParams, pathEvent } from "@/lib/http/route-params";
 import { buildEventPack } from "@/lib/tech/build-event-pack";
@@ -18,7 +19,7 @@ export const GET = defineRoute({
     const pack = await buildEventPack({
       eventId: params.eventId,
       since: query.since ? new Date(query.since) : null,
-      now: new Date(),
+      now: clock.now(),
     });
     const headers = { etag: pack.etag, "cache-control": "private, no-cache" };
     if (request.headers.get("if-none-match") === pack.etag)

@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { clock } from "@/lib/clock";
 import { defineRoute } from "@/lib/http/define-route";
 import { eventParams, pathEvent } from "@/lib/http/route-params";
 import { syncRecords } from "@/lib/tech/sync-records";
@@ -16,7 +17,7 @@ export const POST = defineRoute({
       user,
       roles,
       rawRecords: body.records,
-      now: new Date(),
+      now: clock.now(),
     });
     return NextResponse.json(response, { headers: { "cache-control": "no-store" } });
   },
