@@ -4,7 +4,11 @@ import { FieldError } from "@/components/field-error";
 import { makeRecord } from "@/lib/offline/make-record";
 import { overrideClassChoices } from "@/lib/scrutineer/override-class-choices";
 import { overrideTargetProblem } from "@/lib/scrutineer/override-target-problem";
-import { type OverridePayload, recordSchema } from "@/lib/scrutineer/record-schema";
+import {
+  type OverridePayload,
+  RECORD_TEXT_LIMITS,
+  recordSchema,
+} from "@/lib/scrutineer/record-schema";
 import type { Verdict } from "@/lib/scrutineer/verdict-schema";
 import { useTech } from "./tech-context";
 
@@ -155,6 +159,7 @@ export function ChiefOverrideForm({
           aria-invalid={errors.reason ? true : undefined}
           aria-describedby={errors.reason ? "override-reason-error" : undefined}
           data-testid="override-reason"
+          maxLength={RECORD_TEXT_LIMITS.overrideReason}
         />
       </label>
       <FieldError id="override-reason-error" messages={errors.reason} />

@@ -2,7 +2,7 @@
 import { useMemo, useState } from "react";
 import { FieldError } from "@/components/field-error";
 import { makeRecord } from "@/lib/offline/make-record";
-import { recordSchema, type TechRecord } from "@/lib/scrutineer/record-schema";
+import { RECORD_TEXT_LIMITS, recordSchema, type TechRecord } from "@/lib/scrutineer/record-schema";
 import { useTech } from "./tech-context";
 import { voidChoices } from "./void-choices";
 
@@ -106,6 +106,7 @@ export function ChiefVoidForm({ entryId, records }: { entryId: string; records: 
           aria-invalid={errors.reason ? true : undefined}
           aria-describedby={errors.reason ? "void-reason-error" : undefined}
           data-testid="void-reason"
+          maxLength={RECORD_TEXT_LIMITS.voidReason}
         />
       </label>
       <FieldError id="void-reason-error" messages={errors.reason} />

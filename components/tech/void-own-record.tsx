@@ -2,6 +2,7 @@
 import { useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
 import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import { RECORD_TEXT_LIMITS } from "@/lib/scrutineer/record-schema";
 import { useTech } from "./tech-context";
 
 /**
@@ -63,6 +64,7 @@ export function VoidOwnRecord({ target, what }: { target: TechRecord; what: stri
           placeholder="e.g. typed the wrong number"
           aria-invalid={error ? true : undefined}
           data-testid="void-own-reason"
+          maxLength={RECORD_TEXT_LIMITS.voidReason}
         />
       </label>
       {error ? (

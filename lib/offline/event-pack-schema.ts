@@ -28,6 +28,8 @@ export const packVerdictSchema = z.object({
     .object({ officialId: z.string(), deviceTime: z.string(), problem: z.string() })
     .nullable()
     .default(null),
+  /** Why each reading flagged "implausible-reading" cannot be true, in words. */
+  implausibleReadings: z.array(z.string()).default([]),
   computedAt: z.string(),
 });
 

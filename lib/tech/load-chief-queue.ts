@@ -59,6 +59,7 @@ export async function loadChiefQueue({
         whoAndWhen: whoAndWhen(rejected),
         problem: rejected.problem,
       },
+      implausibleReadings: v.implausibleReadings,
     });
     const row: ChiefQueueRow = {
       entryId: e.entryId,

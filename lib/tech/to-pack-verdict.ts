@@ -4,11 +4,12 @@ import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 
 /** The parts of a stored verdict the short form reads (older stored verdicts lack some). */
 type VerdictLike = Pick<Verdict, "status" | "classId" | "reason" | "flags"> &
-  Partial<Pick<Verdict, "override" | "rejectedOverride">>;
+  Partial<Pick<Verdict, "override" | "rejectedOverride" | "implausibleReadings">>;
 
 /**
  * A verdict in the short form phones and boards use: status, class, reason, flags, and who
- * decided an override (or whose override was not applied, and why) with their device time.
+ * decided an override (or whose override was not applied, and why) with their device time, and
+ * why each implausible reading cannot be true.
  */
 export function toPackVerdict(args: {
   entryId: string;
@@ -31,6 +32,7 @@ export function toPackVerdict(args: {
       deviceTime: rejected.deviceTime,
       problem: rejected.problem,
     },
+    implausibleReadings: (verdict.implausibleReadings ?? []).map((r) => r.why),
     computedAt: args.computedAt.toISOString(),
   };
 }

@@ -77,5 +77,7 @@ describe("a reading that cannot be true (POST /sync)", () => {
     await chief.signInWithPassword(demo.chief, demo.password);
     const page = await (await chief.fetch(`/tech/${fx.eventId}/chief`)).text();
     expect(page).toContain("Check this reading:");
+    // …with the very words that say why, not only a general line.
+    expect(page).toContain("Wing top 99,999 mm above the ground");
   });
 });
