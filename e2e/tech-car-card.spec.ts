@@ -94,17 +94,25 @@ test("readings: a slip is caught before saving, and your own reading can be void
   await expect(wingTop.getByRole("status")).toContainText("Saved on this phone");
   await expect(wingTop.getByTestId("reading-value")).toHaveAttribute("placeholder", "e.g. 1450 mm");
 
-  // 0 mm after 1380 mm: warned, not saved until the scrutineer says so.
-  await card.typeReading("wingTopFromGroundMm", "0");
-  const warning = wingTop.getByTestId("reading-mismatch");
-  await expect(warning).toContainText("0 mm does not agree with your earlier reading, 1380 mm");
-  await warning.getByRole("button", { name: "Fix it" }).click();
-  await expect(warning).toHaveCount(0);
+  // A number no car can carry (five digits typed for four): asked to check it, not saved.
+  await card.typeReading("wingTopFromGroundMm", "99999");
+  const implausible = wingTop.getByTestId("reading-implausible");
+  await expect(implausible).toContainText("Check this reading");
+  await expect(implausible).toContainText("Wing top 99,999 mm above the ground");
+  await implausible.getByRole("button", { name: "Fix it" }).click();
+  await expect(implausible).toHaveCount(0);
   await expect(wingTop.getByTestId("reading-value")).toBeFocused();
-  await wingTop.getByTestId("reading-value").fill("12.3456");
+
+  // 1280 mm after 1380 mm: plausible, but it disagrees with your own reading; warned, not saved
+  // until the scrutineer says so.
+  await wingTop.getByTestId("reading-value").fill("1280.4567");
   await wingTop.getByRole("button", { name: "Save reading" }).click();
+  const warning = wingTop.getByTestId("reading-mismatch");
+  await expect(warning).toContainText(
+    "1280.5 mm does not agree with your earlier reading, 1380 mm",
+  );
   await warning.getByRole("button", { name: "Save anyway" }).click();
-  await expect(wingTop.getByRole("status")).toContainText("12.3 mm");
+  await expect(wingTop.getByRole("status")).toContainText("1280.5 mm");
   // Let the sync land first: the server's verdict then fills in above and moves the card down.
   await expect(card.outboxSummary()).toContainText("2 of 2 sent", { timeout: 20_000 });
   await expect(page.getByTestId("server-verdict")).not.toHaveAttribute("data-status", "none");
@@ -113,8 +121,8 @@ test("readings: a slip is caught before saving, and your own reading can be void
   const typo = wingTop
     .locator("xpath=..")
     .getByTestId("reading-list")
-    .locator("li", { hasText: "12.3 mm" });
-  await typo.getByRole("button", { name: /^Void your reading of 12\.3/ }).click();
+    .locator("li", { hasText: "1280.5 mm" });
+  await typo.getByRole("button", { name: /^Void your reading of 1280\.5/ }).click();
   await typo.getByTestId("void-own-reason").fill("typed the wrong number");
   await typo.getByRole("button", { name: "Void it" }).click();
   await expect(typo).toContainText("Void: typed the wrong number");
@@ -138,7 +146,7 @@ test("readings: a slip is caught before saving, and your own reading can be void
   const list = page.getByTestId("outbox-list");
   await expect(list).toContainText(`Car ${CAR} · Wing top height from the ground 1380 mm`);
   await expect(list).toContainText(
-    `Car ${CAR} · Void of “Wing top height from the ground 12.3 mm”`,
+    `Car ${CAR} · Void of “Wing top height from the ground 1280.5 mm”`,
   );
   await expect(list).not.toContainText("wingTopFromGroundMm");
 });

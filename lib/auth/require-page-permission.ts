@@ -1,9 +1,9 @@
 import "server-only";
 import { forbidden, redirect } from "next/navigation";
 import { getEventRoles } from "../../db/queries/get-event-roles";
+import type { SignedInCaller as Authorized } from "./authorize-access";
 import { getSessionUser, type SessionUser } from "./get-session-user";
 import { can, type Permission } from "./permissions";
-import type { Authorized } from "./require-permission";
 
 /** The page form of the guard: sends a signed-out visitor to sign-in, answers 403 otherwise. */
 export async function requirePagePermission({

@@ -192,14 +192,13 @@ const base = {
 };
 
 /**
- * An immutable tech-line record (strict: a record with a field the server does not know is
- * refused, so nothing a phone sends is silently dropped). The phone makes them, the server stores them, and
+ * An immutable tech-line record. The phone makes them, the server stores them, and
  * `evaluateEntry` derives the verdict from all of an entry's records.
  */
-export const recordSchema = z.discriminatedUnion("kind", [
-  z.strictObject({ ...base, kind: z.literal("reading"), payload: readingPayloadSchema }),
-  z.strictObject({ ...base, kind: z.literal("checklist"), payload: checklistPayloadSchema }),
-  z.strictObject({
+const recordVariants = [
+  z.object({ ...base, kind: z.literal("reading"), payload: readingPayloadSchema }),
+  z.object({ ...base, kind: z.literal("checklist"), payload: checklistPayloadSchema }),
+  z.object({
     ...base,
     kind: z.literal("photo"),
     payload: z.object({
@@ -207,12 +206,12 @@ export const recordSchema = z.discriminatedUnion("kind", [
       caption: z.string().max(RECORD_TEXT_LIMITS.photoCaption).optional(),
     }),
   }),
-  z.strictObject({
+  z.object({
     ...base,
     kind: z.literal("note"),
     payload: z.object({ text: z.string().min(1).max(RECORD_TEXT_LIMITS.note) }),
   }),
-  z.strictObject({
+  z.object({
     ...base,
     kind: z.literal("void"),
     payload: z.object({
@@ -224,8 +223,29 @@ export const recordSchema = z.discriminatedUnion("kind", [
         .min(3, "Say why the record is void"),
     }),
   }),
-  z.strictObject({ ...base, kind: z.literal("override"), payload: overridePayloadSchema }),
+  z.object({ ...base, kind: z.literal("override"), payload: overridePayloadSchema }),
+] as const;
+
+/**
+ * An immutable tech-line record as stored and read back (fields the engine does not use, such as
+ * the server's receive time, are dropped). The phone makes them, the server stores them, and
+ * `evaluateEntry` derives the verdict from all of an entry's records.
+ */
+export const recordSchema = z.discriminatedUnion("kind", [...recordVariants]);
+
+/**
+ * A record as a phone sends it to the sync route: strict, so a record with a field the server
+ * does not know is refused with words, never stored with the field silently dropped.
+ */
+export const incomingRecordSchema = z.discriminatedUnion("kind", [
+  recordVariants[0].strict(),
+  recordVariants[1].strict(),
+  recordVariants[2].strict(),
+  recordVariants[3].strict(),
+  recordVariants[4].strict(),
+  recordVariants[5].strict(),
 ]);
+
 /** One record; see {@link recordSchema}. */
 export type TechRecord = z.infer<typeof recordSchema>;
 /** A record of one kind. */

@@ -8,7 +8,7 @@ import type { SessionUser } from "../auth/get-session-user";
 import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
 import { MAX_VOIDS_PER_ENTRY } from "../scrutineer/max-voids-per-entry";
-import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
+import { incomingRecordSchema, type TechRecord } from "../scrutineer/record-schema";
 import { describeRecordIssue } from "./describe-record-issue";
 import { deviceTimeProblem } from "./device-time-problem";
 import { notifyVerdictChanges } from "./notify-verdict-changes";
@@ -41,7 +41,7 @@ export async function syncRecords({
   if (!context) throw new AppError("not_found", "No such event.");
 
   const results: SyncRecordResult[] = new Array(rawRecords.length);
-  const parsed = rawRecords.map((raw) => recordSchema.safeParse(raw));
+  const parsed = rawRecords.map((raw) => incomingRecordSchema.safeParse(raw));
   // A scrutineer may void their own records: look up who made each record a void names.
   const authors = await listRecordAuthors({
     eventId,

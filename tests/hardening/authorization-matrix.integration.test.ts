@@ -5,12 +5,17 @@
 // one that changes nothing, so allowed callers show the guard let them through.
 import { randomUUID } from "node:crypto";
 import { v7 as uuidv7 } from "uuid";
-import { beforeAll, describe, expect, inject, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { signPass } from "@/lib/passes/sign-pass";
 import { actionOutcome, callServerAction, listServerActions } from "../support/call-server-action";
 import type { HttpSession } from "../support/http-session";
 import { listRouteHandlers, listServerActionSources } from "../support/list-app-endpoints";
-import { type CallerName, callerNames, matrixCallers } from "../support/matrix-callers";
+import {
+  type CallerName,
+  callerNames,
+  matrixCallers,
+  removeOutsider,
+} from "../support/matrix-callers";
 import { queryTestDb } from "../support/query-test-db";
 
 const appUrl = inject("appUrl");
@@ -218,6 +223,7 @@ beforeAll(async () => {
     }),
   };
 }, 60_000);
+afterAll(() => removeOutsider(databaseUrl));
 
 describe("the authorization matrix", () => {
   it("has a row for every route handler and server action in app/", () => {

@@ -10,7 +10,7 @@ import { v7 as uuidv7 } from "uuid";
 import { afterEach, beforeAll, beforeEach, describe, expect, inject, it } from "vitest";
 import { emailSignInSchema, passwordSignInSchema } from "@/lib/auth/sign-in-schema";
 import { carInputSchema } from "@/lib/cars/car-schema";
-import { recordSchema } from "@/lib/scrutineer/record-schema";
+import { incomingRecordSchema } from "@/lib/scrutineer/record-schema";
 import { syncRequestSchema } from "@/lib/tech/sync-schema";
 import { callServerAction } from "../support/call-server-action";
 import { countAllRows } from "../support/count-all-rows";
@@ -131,7 +131,7 @@ describe("POST /api/events/[eventId]/sync", () => {
     const badRecord = fc
       .constant(null)
       .chain(() => fc.oneof(mutate({ ...base, id: uuidv7() }, recordPaths), junkValue))
-      .filter((r) => !recordSchema.safeParse(onTheWire(r)).success);
+      .filter((r) => !incomingRecordSchema.safeParse(onTheWire(r)).success);
     await fc.assert(
       fc.asyncProperty(fc.array(badRecord, { minLength: 1, maxLength: 3 }), async (records) => {
         const response = await sendJson(sam, url(), JSON.stringify({ deviceId: "p", records }));

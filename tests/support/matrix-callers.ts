@@ -3,6 +3,32 @@ import { demo } from "./demo-accounts";
 import { HttpSession } from "./http-session";
 import { queryTestDb } from "./query-test-db";
 
+const OUTSIDER_EMAIL = "chief@other-club.test";
+
+/**
+ * Take out the second event and its official again, so every other test file still finds the
+ * demo event as the only one.
+ */
+export async function removeOutsider(databaseUrl: string): Promise<void> {
+  const [outsider] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from users where email = ?",
+    [OUTSIDER_EMAIL],
+  );
+  if (!outsider) return;
+  const events = await queryTestDb<{ event_id: string }>(
+    databaseUrl,
+    "select event_id from event_officials where user_id = ?",
+    [outsider.id],
+  );
+  await queryTestDb(databaseUrl, "delete from event_officials where user_id = ?", [outsider.id]);
+  for (const { event_id } of events) {
+    await queryTestDb(databaseUrl, "delete from event_pass_keys where event_id = ?", [event_id]);
+    await queryTestDb(databaseUrl, "delete from events where id = ?", [event_id]);
+  }
+  await queryTestDb(databaseUrl, "delete from users where id = ?", [outsider.id]);
+}
+
 /** Everyone the authorization matrix asks as. */
 export const callerNames = [
   "anonymous",
@@ -23,7 +49,10 @@ export type CallerName = (typeof callerNames)[number];
  * event made here ("outsider"). The extra accounts get the demo password's hash (test data).
  */
 export async function matrixCallers(appUrl: string, databaseUrl: string) {
-  const [event] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events limit 1");
+  const [event] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from events order by created_at, id limit 1",
+  );
   if (!event) throw new Error("no event");
   const [owner] = await queryTestDb<{ id: string; password_hash: string }>(
     databaseUrl,
@@ -48,7 +77,7 @@ export async function matrixCallers(appUrl: string, databaseUrl: string) {
     other.id,
   ]);
 
-  const outsiderEmail = "chief@other-club.test";
+  const outsiderEmail = OUTSIDER_EMAIL;
   const [known] = await queryTestDb<{ id: string }>(
     databaseUrl,
     "select id from users where email = ?",
