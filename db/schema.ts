@@ -470,3 +470,13 @@ export const auditLog = mysqlTable(
   },
   (t) => [index("audit_log_event_idx").on(t.eventId, t.createdAt)],
 );
+
+/** Counters of rate-limiter-flexible's MySQL store (lib/auth/sign-in-limits.ts): sign-in attempts
+ *  and sign-in e-mails per account and per client address. Kept in MariaDB so a restart does not
+ *  reset them and several app servers share them. Column order and types are the store's own
+ *  (it inserts `VALUES (key, points, expire)`); `expire` is milliseconds since the epoch. */
+export const rateLimits = mysqlTable("rate_limits", {
+  key: key("key", 255).primaryKey(),
+  points: int("points").notNull().default(0),
+  expire: bigint("expire", { mode: "number", unsigned: true }),
+});
