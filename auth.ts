@@ -20,7 +20,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
   logger: {
     // A wrong password is an everyday event, answered on the form; keep it out of the error log.
     error(error) {
-      if (error.name === "CredentialsSignin") return;
+      // (`type`, not `name`: class names do not survive minification.)
+      if ("type" in error && error.type === "CredentialsSignin") return;
       console.error("[auth]", error);
     },
   },
