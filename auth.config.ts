@@ -1,5 +1,6 @@
 import type { NextAuthConfig } from "next-auth";
 import { env } from "./lib/env";
+import { safeReturnPath } from "./lib/http/safe-return-path";
 
 /** Pages that need a signed-in person; the proxy redirects optimistically, pages still check. */
 export const signedInPrefixes = [
@@ -19,6 +20,10 @@ export const signedInPrefixes = [
  */
 export const authConfig = {
   secret: env.AUTH_SECRET,
+  // Auth.js builds links and redirects from the request's URL. The route handler hands it a
+  // request at APP_URL's origin (lib/auth/limit-auth-endpoint.ts) and the sign-in actions refuse
+  // a request for another host (lib/auth/request-origin-problem.ts), so no request header
+  // chooses the origin. (No AUTH_URL: see request-origin-problem.ts.)
   trustHost: true,
   session: { strategy: "jwt", maxAge: env.SESSION_MAX_AGE_HOURS * 3600 },
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
@@ -30,6 +35,19 @@ export const authConfig = {
         return true;
       }
       return Boolean(auth?.user);
+    },
+    /** Redirect only within this site: a path, or a URL on APP_URL's origin; else home. */
+    redirect({ url, baseUrl }) {
+      if (url.startsWith("/")) return `${baseUrl}${safeReturnPath(url)}`;
+      try {
+        const target = new URL(url);
+        if (target.origin === baseUrl) {
+          return `${baseUrl}${safeReturnPath(`${target.pathname}${target.search}${target.hash}`)}`;
+        }
+      } catch {
+        // not a URL: fall through to home
+      }
+      return `${baseUrl}${safeReturnPath(undefined)}`;
     },
     jwt({ token, user }) {
       if (user?.id) token.sub = user.id;

@@ -6,6 +6,7 @@ import { authConfig } from "./auth.config";
 import { getDb } from "./db/client";
 import { getUserByEmail } from "./db/queries/get-user-by-email";
 import { accounts, sessions, users, verificationTokens } from "./db/schema";
+import { normalizeEmail } from "./lib/auth/normalize-email";
 import { verifyPassword } from "./lib/auth/password";
 import { passwordSignInSchema } from "./lib/auth/sign-in-schema";
 import { env } from "./lib/env";
@@ -19,7 +20,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
   logger: {
     // A wrong password is an everyday event, answered on the form; keep it out of the error log.
     error(error) {
-      if (error.name === "CredentialsSignin") return;
+      // (`type`, not `name`: class names do not survive minification.)
+      if ("type" in error && error.type === "CredentialsSignin") return;
       console.error("[auth]", error);
     },
   },
@@ -34,7 +36,18 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
       server: { host: env.SMTP_HOST, port: env.SMTP_PORT, secure: false },
       from: env.MAIL_FROM,
       maxAge: LINK_VALID_MINUTES * 60,
+      // One spelling per address (lib/auth/normalize-email.ts); the link goes to that spelling
+      // and the account is found by it, byte for byte.
+      normalizeIdentifier(identifier) {
+        const email = normalizeEmail(identifier);
+        if (email === null) throw new Error("refused a sign-in link for an implausible address");
+        return email;
+      },
       async sendVerificationRequest({ identifier, url }) {
+        // AUTH_URL is APP_URL (auth.config.ts); never mail a link to any other origin.
+        if (new URL(url).origin !== new URL(env.APP_URL).origin) {
+          throw new Error(`refused to mail a sign-in link for ${new URL(url).origin}`);
+        }
         const mail = composeSignInMail({
           url,
           host: new URL(url).host,

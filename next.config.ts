@@ -1,7 +1,8 @@
 import withSerwistInit from "@serwist/next";
 import type { NextConfig } from "next";
+import { PHASE_DEVELOPMENT_SERVER, PHASE_PRODUCTION_SERVER } from "next/constants";
 // Validate the environment once, when the app is built and when it starts.
-import { env } from "./lib/env";
+import { assertServerCanStart, env } from "./lib/env";
 import { NON_PAGE_CSP, SERVICE_WORKER_CSP } from "./lib/http/content-security-policy";
 import { securityHeaders } from "./lib/http/security-headers";
 
@@ -48,4 +49,11 @@ const nextConfig: NextConfig = {
   },
 };
 
-export default withSerwist(nextConfig);
+// A server (`next start`, `next dev`) refuses to start live without its own secret and address;
+// a build needs neither, so `next build` works with no environment at all.
+export default function config(phase: string): NextConfig {
+  if (phase === PHASE_PRODUCTION_SERVER || phase === PHASE_DEVELOPMENT_SERVER) {
+    assertServerCanStart(process.env);
+  }
+  return withSerwist(nextConfig);
+}

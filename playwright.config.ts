@@ -6,6 +6,12 @@ import { chromiumArgs } from "./e2e/support/chromium-args";
 const port = Number(process.env.PLUMBLINE_E2E_APP_PORT ?? 3300);
 const baseURL = `http://127.0.0.1:${port}`;
 
+function stringEnv(source: NodeJS.ProcessEnv): Record<string, string> {
+  return Object.fromEntries(
+    Object.entries(source).filter((pair): pair is [string, string] => pair[1] !== undefined),
+  );
+}
+
 export default defineConfig({
   testDir: "e2e",
   fullyParallel: false,
@@ -34,6 +40,8 @@ export default defineConfig({
     },
     {
       command: `node_modules/.bin/next start -H 127.0.0.1 -p ${port}`,
+      // The browser tests sign in to the demo's accounts: ask for the demo (the default is live).
+      env: { ...stringEnv(process.env), PLUMBLINE_MODE: "demo" },
       url: `${baseURL}/api/health`,
       reuseExistingServer: false,
       timeout: 90_000,

@@ -26,17 +26,39 @@ import {
 import { v7 as uuidv7 } from "uuid";
 import { eventRoles } from "../lib/auth/roles";
 
-const uuid = (name: string) => varchar(name, { length: 36 });
+/**
+ * Identifiers, tokens, slugs, keys and e-mail addresses compare byte for byte. The server's
+ * default collation (utf8mb4_unicode_ci) ignores case and accents, so `brackenmöor` would find
+ * the row of `brackenmoor`, and a user id or token in other letter case would find another's.
+ * Drizzle has no collation option, so the column reports it as part of its SQL type (what
+ * drizzle-kit writes into migrations); the column stays a plain varchar/char/text for the code.
+ */
+function binaryCollation<TBuilder extends object>(builder: TBuilder): TBuilder {
+  const build = Reflect.get(builder, "build") as (table: unknown) => { getSQLType(): string };
+  Reflect.set(builder, "build", (table: unknown) => {
+    const column = build.call(builder, table);
+    const sqlType = column.getSQLType();
+    column.getSQLType = () => `${sqlType} CHARACTER SET utf8mb4 COLLATE utf8mb4_bin`;
+    return column;
+  });
+  return builder;
+}
+/** A varchar that identifies something (an id, a token, a slug, an address). */
+const key = <TName extends string>(name: TName, length: number) =>
+  binaryCollation(varchar(name, { length }));
+const uuid = <TName extends string>(name: TName) => key(name, 36);
+/** A user id (Auth.js makes them varchar(255)). */
+const userId = <TName extends string>(name: TName) => key(name, 255);
 const createdAt = () => datetime("created_at", { mode: "date", fsp: 3 }).notNull();
 const updatedAt = () => datetime("updated_at", { mode: "date", fsp: 3 }).notNull();
 
 // ── Auth.js (next-auth v5) tables, column shapes as @auth/drizzle-adapter expects ─────────────
 export const users = mysqlTable("users", {
-  id: varchar("id", { length: 255 })
+  id: userId("id")
     .primaryKey()
     .$defaultFn(() => uuidv7()),
   name: varchar("name", { length: 255 }),
-  email: varchar("email", { length: 255 }).notNull().unique("users_email_unique"),
+  email: key("email", 255).notNull().unique("users_email_unique"),
   emailVerified: timestamp("email_verified", { mode: "date", fsp: 3 }),
   image: varchar("image", { length: 255 }),
   passwordHash: varchar("password_hash", { length: 100 }),
@@ -46,14 +68,14 @@ export const users = mysqlTable("users", {
 export const accounts = mysqlTable(
   "accounts",
   {
-    userId: varchar("user_id", { length: 255 })
+    userId: userId("user_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
     type: varchar("type", { length: 255 })
       .$type<"email" | "oauth" | "oidc" | "webauthn">()
       .notNull(),
-    provider: varchar("provider", { length: 255 }).notNull(),
-    providerAccountId: varchar("provider_account_id", { length: 255 }).notNull(),
+    provider: key("provider", 255).notNull(),
+    providerAccountId: key("provider_account_id", 255).notNull(),
     refresh_token: varchar("refresh_token", { length: 255 }),
     access_token: varchar("access_token", { length: 255 }),
     expires_at: int("expires_at"),
@@ -66,8 +88,8 @@ export const accounts = mysqlTable(
 );
 
 export const sessions = mysqlTable("sessions", {
-  sessionToken: varchar("session_token", { length: 255 }).primaryKey(),
-  userId: varchar("user_id", { length: 255 })
+  sessionToken: key("session_token", 255).primaryKey(),
+  userId: userId("user_id")
     .notNull()
     .references(() => users.id, { onDelete: "cascade" }),
   expires: timestamp("expires", { mode: "date" }).notNull(),
@@ -76,8 +98,8 @@ export const sessions = mysqlTable("sessions", {
 export const verificationTokens = mysqlTable(
   "verification_tokens",
   {
-    identifier: varchar("identifier", { length: 255 }).notNull(),
-    token: varchar("token", { length: 255 }).notNull(),
+    identifier: key("identifier", 255).notNull(),
+    token: key("token", 255).notNull(),
     expires: timestamp("expires", { mode: "date" }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.identifier, t.token], name: "verification_tokens_pk" })],
@@ -87,7 +109,7 @@ export const verificationTokens = mysqlTable(
 export const clubs = mysqlTable("clubs", {
   id: uuid("id").primaryKey(),
   name: varchar("name", { length: 120 }).notNull(),
-  slug: varchar("slug", { length: 60 }).notNull().unique("clubs_slug_unique"),
+  slug: key("slug", 60).notNull().unique("clubs_slug_unique"),
   createdAt: createdAt(),
 });
 
@@ -126,7 +148,7 @@ export const ruleSetVersions = mysqlTable(
     version: int("version").notNull(),
     body: json("body").notNull(),
     notes: varchar("notes", { length: 500 }),
-    createdBy: varchar("created_by", { length: 255 }).references(() => users.id),
+    createdBy: userId("created_by").references(() => users.id),
     createdAt: createdAt(),
     lockedAt: datetime("locked_at", { mode: "date", fsp: 3 }),
   },
@@ -143,7 +165,7 @@ export const events = mysqlTable("events", {
     .notNull()
     .references(() => venues.id),
   name: varchar("name", { length: 160 }).notNull(),
-  slug: varchar("slug", { length: 80 }).notNull().unique("events_slug_unique"),
+  slug: key("slug", 80).notNull().unique("events_slug_unique"),
   /** The event's calendar date at the venue. */
   eventDate: date("event_date", { mode: "string" }).notNull(),
   timeZone: varchar("time_zone", { length: 64 }).notNull(),
@@ -167,7 +189,7 @@ export const eventOfficials = mysqlTable(
     eventId: uuid("event_id")
       .notNull()
       .references(() => events.id),
-    userId: varchar("user_id", { length: 255 })
+    userId: userId("user_id")
       .notNull()
       .references(() => users.id),
     role: mysqlEnum("role", eventRoles).notNull(),
@@ -183,11 +205,11 @@ export const eventOfficials = mysqlTable(
 export const eventPassKeys = mysqlTable(
   "event_pass_keys",
   {
-    kid: varchar("kid", { length: 64 }).primaryKey(),
+    kid: key("kid", 64).primaryKey(),
     eventId: uuid("event_id")
       .notNull()
       .references(() => events.id),
-    publicKeyX: varchar("public_key_x", { length: 64 }).notNull(),
+    publicKeyX: key("public_key_x", 64).notNull(),
     privateKeyPkcs8: text("private_key_pkcs8").notNull(),
     createdAt: createdAt(),
     retiredAt: datetime("retired_at", { mode: "date", fsp: 3 }),
@@ -200,7 +222,7 @@ export const cars = mysqlTable(
   "cars",
   {
     id: uuid("id").primaryKey(),
-    ownerId: varchar("owner_id", { length: 255 })
+    ownerId: userId("owner_id")
       .notNull()
       .references(() => users.id),
     make: varchar("make", { length: 60 }).notNull(),
@@ -225,11 +247,11 @@ export const entries = mysqlTable(
       .notNull()
       .references(() => cars.id),
     carNumber: smallint("car_number").notNull(),
-    declaredClass: varchar("declared_class", { length: 40 }).notNull(),
-    driverId: varchar("driver_id", { length: 255 })
+    declaredClass: key("declared_class", 40).notNull(),
+    driverId: userId("driver_id")
       .notNull()
       .references(() => users.id),
-    coDriverId: varchar("co_driver_id", { length: 255 }).references(() => users.id),
+    coDriverId: userId("co_driver_id").references(() => users.id),
     lapTimeEstimateMs: int("lap_time_estimate_ms"),
     /** Entrant declarations (dyno sheet, tyres, modification points), shaped by lib/scrutineer. */
     declarations: json("declarations").notNull(),
@@ -255,13 +277,13 @@ export const passes = mysqlTable(
     entryId: uuid("entry_id")
       .notNull()
       .references(() => entries.id),
-    kid: varchar("kid", { length: 64 }).notNull(),
-    token: text("token").notNull(),
+    kid: key("kid", 64).notNull(),
+    token: binaryCollation(text("token")).notNull(),
     issuedAt: datetime("issued_at", { mode: "date", fsp: 3 }).notNull(),
     expiresAt: datetime("expires_at", { mode: "date", fsp: 3 }).notNull(),
     revokedAt: datetime("revoked_at", { mode: "date", fsp: 3 }),
     revokedReason: varchar("revoked_reason", { length: 300 }),
-    revokedBy: varchar("revoked_by", { length: 255 }).references(() => users.id),
+    revokedBy: userId("revoked_by").references(() => users.id),
   },
   (t) => [index("passes_event_entry_idx").on(t.eventId, t.entryId)],
 );
@@ -274,7 +296,7 @@ export const recordKinds = ["reading", "checklist", "photo", "note", "void", "ov
 export const records = mysqlTable(
   "records",
   {
-    id: char("id", { length: 36 }).primaryKey(),
+    id: binaryCollation(char("id", { length: 36 })).primaryKey(),
     eventId: uuid("event_id")
       .notNull()
       .references(() => events.id),
@@ -283,10 +305,10 @@ export const records = mysqlTable(
       .references(() => entries.id),
     kind: mysqlEnum("kind", recordKinds).notNull(),
     payload: json("payload").notNull(),
-    officialId: varchar("official_id", { length: 255 })
+    officialId: userId("official_id")
       .notNull()
       .references(() => users.id),
-    deviceId: varchar("device_id", { length: 64 }).notNull(),
+    deviceId: key("device_id", 64).notNull(),
     deviceTime: datetime("device_time", { mode: "date", fsp: 3 }).notNull(),
     receivedAt: datetime("received_at", { mode: "date", fsp: 3 }).notNull(),
   },
@@ -310,7 +332,7 @@ export const verdicts = mysqlTable(
       .notNull()
       .references(() => entries.id),
     status: mysqlEnum("status", verdictStatuses).notNull(),
-    finalClass: varchar("final_class", { length: 40 }),
+    finalClass: key("final_class", 40),
     needsChief: boolean("needs_chief").notNull().default(false),
     reason: varchar("reason", { length: 500 }).notNull(),
     ruleSetVersionId: uuid("rule_set_version_id")
@@ -335,7 +357,7 @@ export const runGroupPublications = mysqlTable(
       .references(() => events.id),
     version: int("version").notNull(),
     body: json("body").notNull(),
-    publishedBy: varchar("published_by", { length: 255 })
+    publishedBy: userId("published_by")
       .notNull()
       .references(() => users.id),
     publishedAt: datetime("published_at", { mode: "date", fsp: 3 }).notNull(),
@@ -354,8 +376,8 @@ export const payments = mysqlTable(
     entryId: uuid("entry_id")
       .notNull()
       .references(() => entries.id),
-    provider: varchar("provider", { length: 30 }).notNull(),
-    providerRef: varchar("provider_ref", { length: 120 }).notNull(),
+    provider: key("provider", 30).notNull(),
+    providerRef: key("provider_ref", 120).notNull(),
     amountMinor: int("amount_minor").notNull(),
     currency: char("currency", { length: 3 }).notNull(),
     status: mysqlEnum("status", ["pending", "paid", "failed", "refunded"]).notNull(),
@@ -378,7 +400,7 @@ export const waivers = mysqlTable(
     entryId: uuid("entry_id")
       .notNull()
       .references(() => entries.id),
-    signerId: varchar("signer_id", { length: 255 })
+    signerId: userId("signer_id")
       .notNull()
       .references(() => users.id),
     signedName: varchar("signed_name", { length: 160 }).notNull(),
@@ -399,14 +421,14 @@ export const uploads = mysqlTable(
       .notNull()
       .references(() => events.id),
     entryId: uuid("entry_id").references(() => entries.id),
-    recordId: char("record_id", { length: 36 }),
+    recordId: binaryCollation(char("record_id", { length: 36 })),
     kind: mysqlEnum("kind", ["photo", "dyno-sheet", "other"]).notNull(),
-    bucket: varchar("bucket", { length: 63 }).notNull(),
-    objectKey: varchar("object_key", { length: 300 }).notNull(),
+    bucket: key("bucket", 63).notNull(),
+    objectKey: key("object_key", 300).notNull(),
     contentType: varchar("content_type", { length: 100 }).notNull(),
     byteSize: int("byte_size").notNull(),
-    sha256: char("sha256", { length: 64 }),
-    uploadedBy: varchar("uploaded_by", { length: 255 })
+    sha256: binaryCollation(char("sha256", { length: 64 })),
+    uploadedBy: userId("uploaded_by")
       .notNull()
       .references(() => users.id),
     createdAt: createdAt(),
@@ -423,10 +445,10 @@ export const mailLog = mysqlTable(
   {
     id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
     eventId: uuid("event_id").references(() => events.id),
-    toAddress: varchar("to_address", { length: 255 }).notNull(),
+    toAddress: key("to_address", 255).notNull(),
     subject: varchar("subject", { length: 255 }).notNull(),
     kind: varchar("kind", { length: 40 }).notNull(),
-    messageId: varchar("message_id", { length: 255 }),
+    messageId: key("message_id", 255),
     status: mysqlEnum("status", ["sent", "failed"]).notNull(),
     error: varchar("error", { length: 500 }),
     createdAt: createdAt(),
@@ -439,12 +461,22 @@ export const auditLog = mysqlTable(
   {
     id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
     eventId: uuid("event_id").references(() => events.id),
-    actorId: varchar("actor_id", { length: 255 }).references(() => users.id),
+    actorId: userId("actor_id").references(() => users.id),
     action: varchar("action", { length: 64 }).notNull(),
     subjectType: varchar("subject_type", { length: 40 }).notNull(),
-    subjectId: varchar("subject_id", { length: 64 }).notNull(),
+    subjectId: key("subject_id", 64).notNull(),
     detail: json("detail"),
     createdAt: createdAt(),
   },
   (t) => [index("audit_log_event_idx").on(t.eventId, t.createdAt)],
 );
+
+/** Counters of rate-limiter-flexible's MySQL store (lib/auth/sign-in-limits.ts): sign-in attempts
+ *  and sign-in e-mails per account and per client address. Kept in MariaDB so a restart does not
+ *  reset them and several app servers share them. Column order and types are the store's own
+ *  (it inserts `VALUES (key, points, expire)`); `expire` is milliseconds since the epoch. */
+export const rateLimits = mysqlTable("rate_limits", {
+  key: key("key", 255).primaryKey(),
+  points: int("points").notNull().default(0),
+  expire: bigint("expire", { mode: "number", unsigned: true }),
+});

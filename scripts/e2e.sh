@@ -6,6 +6,8 @@ set -euo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 export TZ=UTC NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-test}" NEXT_TELEMETRY_DISABLED=1
+# The browser tests run the demo and ask for it (the app's default is live).
+export PLUMBLINE_MODE=demo
 E2E_DB="$(node_modules/.bin/tsx scripts/e2e-database.ts create)"
 trap 'node_modules/.bin/tsx scripts/e2e-database.ts drop "$E2E_DB" || true' EXIT
 export PLUMBLINE_E2E_APP_PORT="${PLUMBLINE_E2E_APP_PORT:-3300}"

@@ -14,6 +14,9 @@ bash scripts/mariadb.sh start
 mkdir -p .data
 
 export PORT="${PORT:-3000}" NEXT_TELEMETRY_DISABLED=1
+# npm start is the demo: it asks for it (the app's default is live), which gives the published
+# AUTH_SECRET, the demo accounts and the /demo pages. A live deployment runs `next start` itself.
+export PLUMBLINE_MODE=demo
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
 
 node_modules/.bin/tsx scripts/migrate.ts

@@ -17,6 +17,8 @@ if ! bash scripts/mariadb.sh status; then
 fi
 bash scripts/mariadb.sh start
 export TZ=UTC NEXT_TELEMETRY_DISABLED=1
+# The tests run the demo (seeded accounts, demo mailbox) and ask for it; the app's default is live.
+export PLUMBLINE_MODE=demo
 export NEXT_DIST_DIR=.next-test
 mkdir -p .data
 

@@ -3,7 +3,11 @@ import { eq } from "drizzle-orm";
 import { getDb } from "../client";
 import { users } from "../schema";
 
-/** The user with this e-mail (lower-cased), or null. Includes the password hash: server only. */
+/**
+ * The user with exactly this e-mail address, or null. Pass it normalized
+ * (lib/auth/normalize-email.ts); the column compares byte for byte (utf8mb4_bin).
+ * Includes the password hash: server only.
+ */
 export async function getUserByEmail({ email }: { email: string }) {
   const [row] = await getDb()
     .select({
@@ -13,7 +17,7 @@ export async function getUserByEmail({ email }: { email: string }) {
       passwordHash: users.passwordHash,
     })
     .from(users)
-    .where(eq(users.email, email.trim().toLowerCase()))
+    .where(eq(users.email, email))
     .limit(1);
   return row ?? null;
 }

@@ -1,6 +1,8 @@
 // The demo event day (invented): a club, its venue, a rule set, one event with about 40 entries in
 // four classes, an official for every role, and entrants — one car shared by two drivers.
 import { v7 as uuidv7 } from "uuid";
+import { normalizeEmail } from "../../lib/auth/normalize-email";
+import { modeNow } from "../../lib/env";
 import { displayUnits } from "../../lib/scrutineer/display-units";
 import type { EntryDeclarationsInput } from "../../lib/scrutineer/entry-declarations-schema";
 import { entryDeclarationsSchema } from "../../lib/scrutineer/entry-declarations-schema";
@@ -46,6 +48,13 @@ const classPlan = [
 
 export type DemoSeed = { eventId: string; entryIds: string[]; userIds: Record<string, string> };
 
+/** A demo account's address, in the one spelling sign-in compares (lib/auth/normalize-email.ts). */
+function demoEmail(key: string): string {
+  const email = normalizeEmail(`${key}@${demoDomain}`);
+  if (email === null) throw new Error(`demo address for ${key} is not plausible`);
+  return email;
+}
+
 /** The Saturday on or after `today` (YYYY-MM-DD), as YYYY-MM-DD. */
 export function nextSaturday(today: string): string {
   const date = new Date(`${today}T12:00:00Z`);
@@ -53,8 +62,17 @@ export function nextSaturday(today: string): string {
   return date.toISOString().slice(0, 10);
 }
 
-/** Insert the whole demo in one transaction. `today` decides the event date (next Saturday). */
+/**
+ * Insert the whole demo in one transaction. `today` decides the event date (next Saturday).
+ * Every demo account gets the password published in demo-password.ts, so this runs only when
+ * the environment asks for the demo (PLUMBLINE_MODE=demo).
+ */
 export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSeed> {
+  if (modeNow() !== "demo") {
+    throw new Error(
+      "Plumbline: refusing to seed the demo — its accounts share the password published in db/seed/demo-password.ts. Set PLUMBLINE_MODE=demo to seed a demo database.",
+    );
+  }
   const rnd = createPrng(20270417);
   const now = new Date();
   const eventDate = nextSaturday(opts.today);
@@ -72,7 +90,7 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     userRows.push({
       id,
       name,
-      email: `${key}@${demoDomain}`,
+      email: demoEmail(key),
       emailVerified: now,
       passwordHash: DEMO_PASSWORD_HASH,
       createdAt: now,

@@ -1,10 +1,20 @@
 import { z } from "zod";
+import { normalizeEmail } from "./normalize-email";
 
+const EMAIL_MESSAGE = "Enter an e-mail address like name@example.com";
+
+/** An e-mail address as typed, normalized once (lib/auth/normalize-email.ts) or refused. */
 export const emailSchema = z
-  .string()
-  .trim()
-  .toLowerCase()
-  .pipe(z.email({ message: "Enter an e-mail address like name@example.com" }).max(255));
+  .string({ error: EMAIL_MESSAGE })
+  .max(320, EMAIL_MESSAGE)
+  .transform((value, ctx) => {
+    const email = normalizeEmail(value);
+    if (email === null) {
+      ctx.addIssue({ code: "custom", message: EMAIL_MESSAGE });
+      return z.NEVER;
+    }
+    return email;
+  });
 
 export const passwordSignInSchema = z.object({
   email: emailSchema,

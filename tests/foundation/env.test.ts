@@ -1,21 +1,48 @@
 import { describe, expect, it } from "vitest";
-import { parseEnv } from "@/lib/env";
+import { assertServerCanStart, DEMO_AUTH_SECRET, parseEnv, serverStartProblems } from "@/lib/env";
+
+const realSecret = "a-real-secret-of-forty-characters-xxxxxxx";
 
 describe("parseEnv", () => {
-  it("gives the demo everything on 127.0.0.1 by default", () => {
+  it("is live unless the demo is asked for, with the local services on 127.0.0.1", () => {
     const env = parseEnv({});
-    expect(env.PLUMBLINE_MODE).toBe("demo");
+    expect(env.PLUMBLINE_MODE).toBe("live");
     expect(new URL(env.DATABASE_URL.replace("mysql:", "http:")).hostname).toBe("127.0.0.1");
     expect(env.SMTP_HOST).toBe("127.0.0.1");
     expect(new URL(env.S3_ENDPOINT).hostname).toBe("127.0.0.1");
     expect(env.SESSION_MAX_AGE_HOURS).toBeGreaterThanOrEqual(24);
   });
+  it("gives the published secret to the demo only", () => {
+    expect(parseEnv({ PLUMBLINE_MODE: "demo" }).AUTH_SECRET).toBe(DEMO_AUTH_SECRET);
+    expect(parseEnv({}).AUTH_SECRET).toBeUndefined();
+  });
   it("refuses the demo secret in live mode and says which variable", () => {
-    expect(() => parseEnv({ PLUMBLINE_MODE: "live" })).toThrow(/AUTH_SECRET/);
+    expect(() => parseEnv({ AUTH_SECRET: DEMO_AUTH_SECRET })).toThrow(/AUTH_SECRET/);
+    expect(() => parseEnv({ PLUMBLINE_MODE: "live", AUTH_SECRET: DEMO_AUTH_SECRET })).toThrow(
+      /AUTH_SECRET/,
+    );
   });
   it("lists every bad variable at once", () => {
     expect(() => parseEnv({ SMTP_PORT: "99999", APP_URL: "not a url" })).toThrow(
       /SMTP_PORT[\s\S]*APP_URL|APP_URL[\s\S]*SMTP_PORT/,
     );
+  });
+  it("builds with no environment at all (next build parses it)", () => {
+    expect(() => parseEnv({})).not.toThrow();
+  });
+});
+
+describe("serverStartProblems", () => {
+  it("stops a live server without its own secret and address, naming both", () => {
+    const problems = serverStartProblems({});
+    expect(problems.join("\n")).toMatch(/AUTH_SECRET/);
+    expect(problems.join("\n")).toMatch(/APP_URL/);
+    expect(() => assertServerCanStart({})).toThrow(/refusing to start a live server/);
+  });
+  it("starts live with both, and the demo when asked", () => {
+    expect(
+      serverStartProblems({ AUTH_SECRET: realSecret, APP_URL: "https://tech.example.org" }),
+    ).toEqual([]);
+    expect(serverStartProblems({ PLUMBLINE_MODE: "demo" })).toEqual([]);
   });
 });

@@ -11,6 +11,10 @@ describe("safeReturnPath", () => {
       "https://evil.test/",
       "//evil.test",
       "/\\evil.test",
+      // Browsers drop tabs and newlines from URLs and read a backslash as a slash.
+      "/\t/evil.test",
+      "/\n/evil.test",
+      "/\t\\evil.test",
       "javascript:alert(1)",
       "",
       42,

@@ -26,6 +26,10 @@ export function testServiceEnv(
     MAILBOX_URL: `http://127.0.0.1:${testPorts.mailbox}`,
     S3_ENDPOINT: `http://127.0.0.1:${testPorts.s3}`,
     NEXT_DIST_DIR: testDistDir,
+    // The tests run the demo's accounts and mailbox, and ask for it (the default is live).
     PLUMBLINE_MODE: "demo",
+    // The tests play the one trusted proxy: a test picks its client address with
+    // X-Forwarded-For (lib/auth/client-address.ts), as a proxy in front of a live server would.
+    TRUSTED_PROXY_HOPS: "1",
   };
 }

@@ -1,12 +1,26 @@
 "use server";
+import { headers } from "next/headers";
 import { AuthError } from "next-auth";
 import { signIn } from "@/auth";
+import { clientAddress } from "@/lib/auth/client-address";
+import { requestOriginProblem } from "@/lib/auth/request-origin-problem";
+import { forgivePasswordAttempt, takeSignInAttempt } from "@/lib/auth/sign-in-limits";
 import { emailSignInSchema, passwordSignInSchema } from "@/lib/auth/sign-in-schema";
 import type { FieldErrors } from "@/lib/errors";
 import { safeReturnPath } from "@/lib/http/safe-return-path";
 import { zodFieldErrors } from "@/lib/http/zod-field-errors";
 
 export type SignInState = { message?: string; fields?: FieldErrors; email?: string };
+
+/** Next's redirect() is thrown; it is how a successful signIn() ends. */
+function isRedirect(error: unknown): boolean {
+  return (
+    typeof error === "object" &&
+    error !== null &&
+    "digest" in error &&
+    String(error.digest).startsWith("NEXT_REDIRECT")
+  );
+}
 
 /** Password sign-in. On success Auth.js redirects; on failure we say so without hinting which part was wrong. */
 export async function signInWithPassword(_prev: SignInState, form: FormData): Promise<SignInState> {
@@ -16,6 +30,14 @@ export async function signInWithPassword(_prev: SignInState, form: FormData): Pr
   });
   const email = typeof form.get("email") === "string" ? String(form.get("email")) : "";
   if (!parsed.success) return { fields: zodFieldErrors(parsed.error), email };
+  const request = await headers();
+  // signIn() builds its redirect from the request's host headers: only APP_URL's may start it.
+  const wrongOrigin = requestOriginProblem(request);
+  if (wrongOrigin) return { message: wrongOrigin, email };
+  // Counted before the password is checked, for known and unknown addresses alike.
+  const who = { email: parsed.data.email, clientAddress: clientAddress(request) };
+  const limit = await takeSignInAttempt("password", who);
+  if (!limit.ok) return { message: limit.message, email };
   try {
     await signIn("credentials", {
       ...parsed.data,
@@ -25,6 +47,7 @@ export async function signInWithPassword(_prev: SignInState, form: FormData): Pr
     if (error instanceof AuthError) {
       return { message: "That e-mail and password do not match an account.", email };
     }
+    if (isRedirect(error)) await forgivePasswordAttempt(who);
     throw error; // the success redirect
   }
   return {};
@@ -38,6 +61,13 @@ export async function signInWithEmailLink(
   const parsed = emailSignInSchema.safeParse({ email: form.get("email") });
   const email = typeof form.get("email") === "string" ? String(form.get("email")) : "";
   if (!parsed.success) return { fields: zodFieldErrors(parsed.error), email };
+  const request = await headers();
+  // signIn() builds the mailed link from the request's host headers: only APP_URL's may.
+  const wrongOrigin = requestOriginProblem(request);
+  if (wrongOrigin) return { message: wrongOrigin, email };
+  const who = { email: parsed.data.email, clientAddress: clientAddress(request) };
+  const limit = await takeSignInAttempt("link", who);
+  if (!limit.ok) return { message: limit.message, email };
   try {
     await signIn("nodemailer", {
       email: parsed.data.email,

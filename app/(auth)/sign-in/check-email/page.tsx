@@ -3,6 +3,8 @@ import Link from "next/link";
 import { isDemo } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Check your e-mail" };
+// The demo mailbox link depends on the server's mode, not on how the build was made.
+export const dynamic = "force-dynamic";
 
 export default function CheckEmailPage() {
   return (

@@ -1,0 +1,73 @@
+import { type ChildProcess, spawn } from "node:child_process";
+import path from "node:path";
+
+export type LaunchedServer = {
+  url: string;
+  /** Resolves "healthy" once /api/health answers 200, or "exited" if the process ends first. */
+  outcome: Promise<"healthy" | "exited">;
+  exitCode: () => number | null;
+  output: () => string;
+  stop: () => Promise<void>;
+};
+
+/**
+ * Start `next start` of the test build with exactly `env` (plus PATH and HOME, nothing else
+ * inherited), to see what a deployment with that environment does. Bounded: gives up after
+ * 60 s. The caller stops it.
+ */
+export function launchAppServer(opts: {
+  port: number;
+  env: Record<string, string>;
+}): LaunchedServer {
+  const root = path.resolve(import.meta.dirname, "../..");
+  const child: ChildProcess = spawn(
+    path.join(root, "node_modules/.bin/next"),
+    ["start", "-H", "127.0.0.1", "-p", String(opts.port)],
+    {
+      cwd: root,
+      env: {
+        PATH: process.env.PATH ?? "",
+        HOME: process.env.HOME ?? "",
+        NEXT_TELEMETRY_DISABLED: "1",
+        TZ: "UTC",
+        ...opts.env,
+        NODE_ENV: "production",
+      },
+      stdio: ["ignore", "pipe", "pipe"],
+    },
+  );
+  let output = "";
+  child.stdout?.on("data", (d: Buffer) => {
+    output += d.toString();
+  });
+  child.stderr?.on("data", (d: Buffer) => {
+    output += d.toString();
+  });
+  const url = `http://127.0.0.1:${opts.port}`;
+  const exited = new Promise<"exited">((resolve) => child.once("exit", () => resolve("exited")));
+  const healthy = (async (): Promise<"healthy" | "exited"> => {
+    const deadline = Date.now() + 60_000;
+    while (Date.now() < deadline && child.exitCode === null) {
+      try {
+        if ((await fetch(`${url}/api/health`)).status === 200) return "healthy";
+      } catch {
+        // not listening yet
+      }
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    return "exited";
+  })();
+  return {
+    url,
+    outcome: Promise.race([healthy, exited]),
+    exitCode: () => child.exitCode,
+    output: () => output,
+    stop: () =>
+      new Promise<void>((resolve) => {
+        if (child.exitCode !== null) return resolve();
+        child.once("exit", () => resolve());
+        child.kill("SIGTERM");
+        setTimeout(() => child.kill("SIGKILL"), 5000).unref();
+      }),
+  };
+}
