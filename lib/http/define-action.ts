@@ -25,8 +25,9 @@ type ActionSpec<S extends z.ZodType, State, A extends ActionAccess<z.infer<S>>> 
   fields: readonly string[];
   schema: S;
   access: A;
-  /** How a refusal (bad input, not allowed, not found) reads in this form's state. */
-  refuse: (refusal: ActionRefusal) => State;
+  /** How a refusal (bad input, not allowed, not found) reads in this form's state; the form is
+   * there to echo what the person typed. */
+  refuse: (refusal: ActionRefusal, form: FormData) => State;
   handler: (input: z.infer<S>, caller: CallerFor<A>) => Promise<State>;
 };
 
@@ -54,17 +55,17 @@ export function defineAction<S extends z.ZodType, State, A extends ActionAccess<
       );
       const parsed = spec.schema.safeParse(raw);
       if (!parsed.success) {
-        return spec.refuse({
-          message: "Some fields need attention.",
-          fields: zodFieldErrors(parsed.error),
-        });
+        return spec.refuse(
+          { message: "Some fields need attention.", fields: zodFieldErrors(parsed.error) },
+          form,
+        );
       }
       const input = parsed.data as z.infer<S>;
       const caller = await authorize(spec.access, input);
       return await spec.handler(input, caller as CallerFor<A>);
     } catch (error) {
       if (error instanceof AppError) {
-        return spec.refuse({ message: error.message, fields: error.fields });
+        return spec.refuse({ message: error.message, fields: error.fields }, form);
       }
       throw error;
     }

@@ -11,10 +11,12 @@ import { readCappedBody } from "./read-capped-body";
 
 type Input<P, Q> = { params: P; query: Q };
 
-/** What a request may carry: a JSON body checked by a schema, a multipart form, or nothing. */
+/** What a request may carry: a JSON body checked by a schema, a multipart form, bytes handed on
+ * as they are (to a library that parses its own, like Auth.js), or nothing. */
 type BodySpec<B> =
   | { json: z.ZodType<B>; limit: BodyLimit }
-  | { form: (form: FormData) => B; limit: BodyLimit };
+  | { form: (form: FormData) => B; limit: BodyLimit }
+  | { raw: (bytes: Uint8Array) => B; limit: BodyLimit };
 
 /** A public route may have no signed-in caller; every other kind has one. */
 type CallerFor<A> = A extends { public: string } ? Caller : SignedInCaller;
@@ -71,6 +73,7 @@ async function readBody<B>(request: Request, spec: BodySpec<B>): Promise<B> {
   const contentType = request.headers.get("content-type") ?? "";
   const type = contentType.toLowerCase();
   const limit = BODY_LIMITS[spec.limit];
+  if ("raw" in spec) return spec.raw(await readCappedBody(request, limit));
   if ("json" in spec) {
     if (!type.startsWith("application/json")) {
       await request.body?.cancel().catch(() => undefined);
