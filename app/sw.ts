@@ -1,4 +1,6 @@
 /// <reference lib="webworker" />
+// First, before any schema is made: no eval probe under the worker's CSP.
+import "@/lib/zod-without-eval";
 import { defaultCache } from "@serwist/next/worker";
 import type { PrecacheEntry, SerwistGlobalConfig } from "serwist";
 import { ExpirationPlugin, NetworkFirst, NetworkOnly, Serwist } from "serwist";

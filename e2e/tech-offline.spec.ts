@@ -7,6 +7,7 @@ import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
 import { TechLinePage } from "./pages/tech-line-page";
 import { chromiumArgs } from "./support/chromium-args";
+import { watchCspViolations } from "./support/csp-violations";
 import { forgePass } from "./support/forge-pass";
 import { localRecordIds } from "./support/local-record-ids";
 import { takeOffline } from "./support/network-switch";
@@ -53,6 +54,7 @@ test("the tech line offline: prepare, scan, record, reload offline, sync, verdic
     baseURL: baseURL ?? "",
     permissions: ["camera"],
   });
+  const cspViolations = await watchCspViolations(context);
   const page = await context.newPage();
   await new SignInPage(page).open();
   await new SignInPage(page).withPassword(demo.scrutineer, demo.password);
@@ -98,6 +100,8 @@ test("the tech line offline: prepare, scan, record, reload offline, sync, verdic
   // Scan the real pass with the camera: straight to car 7's card, no network on the path.
   await page.getByRole("button", { name: "Scan a pass" }).click();
   await expect(page.getByTestId("car-card-number")).toHaveText("7", { timeout: 20_000 });
+  // The camera scanner ran under the content security policy with nothing blocked.
+  expect(await cspViolations(page)).toEqual([]);
 
   // Record readings, a checklist answer (the battery is not clamped: a safety failure) and a photo.
   await tech.recordReading("wingTopFromGroundMm", "1395");

@@ -55,7 +55,7 @@ build_is_stale() {
   local dist="$1"
   [ -f "$ROOT/$dist/BUILD_ID" ] || return 0
   [ "$(cat "$ROOT/$dist/.plumbline-sw-sha" 2>/dev/null)" = "$(sw_hash)" ] || return 0
-  [ -n "$(cd "$ROOT" && find app components lib db public auth.ts auth.config.ts proxy.ts next.config.ts \
+  [ -n "$(cd "$ROOT" && find app components lib db public auth.ts auth.config.ts proxy.ts next.config.ts instrumentation-client.ts \
     tailwind.config.ts postcss.config.mjs package-lock.json -newer "$dist/BUILD_ID" -type f \
     -not -name 'sw.js' -not -name 'swe-worker-*' -print -quit 2>/dev/null)" ]
 }
