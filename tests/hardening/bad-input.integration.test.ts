@@ -185,6 +185,47 @@ describe("POST /api/events/[eventId]/uploads", () => {
   }, 240_000);
 });
 
+describe("Auth.js's own POST endpoints", () => {
+  // Each try from its own documentation address (RFC 5737 TEST-NET-3), so the per-network
+  // sign-in limit never blocks the demo accounts other tests sign in with.
+  let n = 0;
+  const address = () => {
+    n += 1;
+    return `203.0.113.${n % 250}`;
+  };
+
+  it(`answers ${RUNS} malformed sign-in posts without a 5xx and signs in nobody`, async () => {
+    const field = fc.option(junkText, { nil: undefined });
+    await fc.assert(
+      fc.asyncProperty(
+        fc.constantFrom("/api/auth/callback/credentials", "/api/auth/signin/nodemailer"),
+        field,
+        field,
+        field,
+        fc.constantFrom("application/x-www-form-urlencoded", "application/json", "text/plain"),
+        async (path, email, password, csrfToken, type) => {
+          const fields: Record<string, string> = {};
+          if (email !== undefined) fields.email = email;
+          if (password !== undefined) fields.password = password;
+          if (csrfToken !== undefined) fields.csrfToken = csrfToken;
+          const body = type.includes("json")
+            ? JSON.stringify(fields)
+            : new URLSearchParams(fields).toString();
+          const session = new HttpSession(appUrl);
+          const response = await session.fetch(path, {
+            method: "POST",
+            headers: { "content-type": type, "x-forwarded-for": address() },
+            body,
+          });
+          expect(response.status, await response.text()).toBeLessThan(500);
+          expect(session.hasCookie("authjs.session-token")).toBe(false);
+        },
+      ),
+      { numRuns: RUNS },
+    );
+  }, 300_000);
+});
+
 /** The answer of a server action to junk: an error state in words, never a 5xx. */
 async function expectActionRefusal(answer: { status: number; text: string }) {
   expect(answer.status, answer.text.slice(0, 300)).toBe(200);
