@@ -1,8 +1,7 @@
 import "server-only";
-import { getEntryVerdict } from "../../db/queries/get-entry-verdict";
 import { getEventRoles } from "../../db/queries/get-event-roles";
-import { isOwnEntry } from "../../db/queries/is-own-entry";
 import { AppError } from "../errors";
+import { authorizeEntryRead } from "./authorize-entry-read";
 import { getSessionUser, type SessionUser } from "./get-session-user";
 import { can } from "./permissions";
 import type { Role } from "./roles";
@@ -29,15 +28,6 @@ export async function authorizeAccess<P>(access: RouteAccess<P>, input: P): Prom
     }
     return { user, roles };
   }
-  const entryId = access.entry(input);
-  const row = await getEntryVerdict({ entryId });
-  if (!row) throw new AppError("not_found", "No such entry.");
-  const [own, roles] = await Promise.all([
-    isOwnEntry({ entryId, userId: user.id }),
-    getEventRoles({ eventId: row.eventId, userId: user.id }),
-  ]);
-  if (!(own && can(roles, "own-entries.read")) && !can(roles, "entries.read")) {
-    throw new AppError("forbidden", "This entry is not yours to see.");
-  }
+  const { roles } = await authorizeEntryRead({ entryId: access.entry(input), user });
   return { user, roles };
 }

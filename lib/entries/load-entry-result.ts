@@ -1,11 +1,7 @@
 import "server-only";
-import { getEntryVerdict } from "../../db/queries/get-entry-verdict";
-import { getEventRoles } from "../../db/queries/get-event-roles";
-import { isOwnEntry } from "../../db/queries/is-own-entry";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
+import { authorizeEntryRead } from "../auth/authorize-entry-read";
 import type { SessionUser } from "../auth/get-session-user";
-import { can } from "../auth/permissions";
-import { AppError } from "../errors";
 import { classNamesFromRuleSet } from "../passes/class-names-from-rule-set";
 import { formatWhoAndWhen } from "../tech/format-who-and-when";
 import type { EntryResult } from "./entry-result";
@@ -22,15 +18,7 @@ export async function loadEntryResult({
   entryId: string;
   user: SessionUser;
 }): Promise<EntryResult> {
-  const row = await getEntryVerdict({ entryId });
-  if (!row) throw new AppError("not_found", "No such entry.");
-  const [own, roles] = await Promise.all([
-    isOwnEntry({ entryId, userId: user.id }),
-    getEventRoles({ eventId: row.eventId, userId: user.id }),
-  ]);
-  if (!(own && can(roles, "own-entries.read")) && !can(roles, "entries.read")) {
-    throw new AppError("forbidden", "This entry is not yours to see.");
-  }
+  const { row } = await authorizeEntryRead({ entryId, user });
   // A stored verdict that does not read as one counts as none: the car shows as Waiting.
   const verdict = parseStoredVerdict({ entryId: row.entryId, result: row.result });
   const names = classNamesFromRuleSet(row.ruleSetBody);

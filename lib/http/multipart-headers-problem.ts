@@ -12,10 +12,20 @@ export function multipartHeadersProblem(body: string, contentType: string): stri
     if (part.startsWith("--")) break;
     const end = part.indexOf("\r\n\r\n");
     const head = end < 0 ? part : part.slice(0, end);
-    // Tab is allowed in header text; CR and LF separate the header lines.
-    if (/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(head)) {
+    if (hasControlCharacter(head)) {
       return "A field of the form has a name that cannot be sent.";
     }
   }
   return null;
+}
+
+/** A control character other than tab (allowed in header text) and CR/LF (between the lines). */
+function hasControlCharacter(text: string): boolean {
+  for (let i = 0; i < text.length; i += 1) {
+    const code = text.charCodeAt(i);
+    if ((code < 0x20 && code !== 0x09 && code !== 0x0a && code !== 0x0d) || code === 0x7f) {
+      return true;
+    }
+  }
+  return false;
 }

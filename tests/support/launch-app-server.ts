@@ -7,7 +7,8 @@ export type LaunchedServer = {
   outcome: Promise<"healthy" | "exited">;
   exitCode: () => number | null;
   output: () => string;
-  stop: () => Promise<void>;
+  /** Stop the server: SIGTERM lets it finish; SIGKILL cuts it off mid-request. */
+  stop: (signal?: NodeJS.Signals) => Promise<void>;
 };
 
 /**
@@ -18,6 +19,8 @@ export type LaunchedServer = {
 export function launchAppServer(opts: {
   port: number;
   env: Record<string, string>;
+  /** Also pass on this process's environment (the test services' settings), under `env`. */
+  inherit?: boolean;
 }): LaunchedServer {
   const root = path.resolve(import.meta.dirname, "../..");
   const child: ChildProcess = spawn(
@@ -26,6 +29,7 @@ export function launchAppServer(opts: {
     {
       cwd: root,
       env: {
+        ...(opts.inherit ? process.env : {}),
         PATH: process.env.PATH ?? "",
         HOME: process.env.HOME ?? "",
         NEXT_TELEMETRY_DISABLED: "1",
@@ -62,11 +66,11 @@ export function launchAppServer(opts: {
     outcome: Promise.race([healthy, exited]),
     exitCode: () => child.exitCode,
     output: () => output,
-    stop: () =>
+    stop: (signal = "SIGTERM") =>
       new Promise<void>((resolve) => {
         if (child.exitCode !== null) return resolve();
         child.once("exit", () => resolve());
-        child.kill("SIGTERM");
+        child.kill(signal);
         setTimeout(() => child.kill("SIGKILL"), 5000).unref();
       }),
   };
