@@ -55,6 +55,13 @@ export async function startSmtpFake(opts: {
     },
   });
 
+  // A client that hangs up mid-conversation (an app server a test stops or kills while its
+  // transport holds a connection) ends that connection, not the mail server: without a
+  // listener, SMTPServer's 'error' event would throw and take the whole test run down.
+  smtp.on("error", (error: Error & { code?: string }) => {
+    console.warn(`[smtp-fake] a client connection failed: ${error.code ?? error.message}`);
+  });
+
   const http = createServer((req, res) => {
     handleMailboxRequest(opts.dir, req.method ?? "GET", new URL(req.url ?? "/", "http://x"))
       .then(({ status, body }) => {
