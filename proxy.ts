@@ -14,11 +14,13 @@ const plain = (status: number, text: string) =>
   new Response(text, { status, headers: { "content-type": "text/plain; charset=utf-8" } });
 
 /**
- * A server action's body over its page's limit is refused before Next reads it; one whose form
- * parts Next's parser could not read is refused as the client's mistake, not answered 500.
+ * A POST to a page is a server action (with the Next-Action header from a page's script, or as a
+ * plain form post without one): its body over the page's limit is refused before Next reads it,
+ * and a form whose parts Next's parser could not read is refused as the client's mistake (400),
+ * never answered 500.
  */
 async function refuseBadAction(request: NextRequest): Promise<Response | null> {
-  if (request.method !== "POST" || !request.headers.has("next-action")) return null;
+  if (request.method !== "POST") return null;
   const limit = actionBodyLimit(request.nextUrl.pathname);
   const length = request.headers.get("content-length");
   if (length === null || !/^\d+$/.test(length) || Number(length) > limit) {
@@ -58,6 +60,8 @@ export const proxy = auth(async (request) => {
 
 export const config = {
   matcher: [
-    "/((?!api|_next/static|_next/image|sw.js|swe-worker|manifest.webmanifest|icons|favicon).*)",
+    // Everything but route handlers, Next's own files, the service worker, manifest and icons
+    // (each with its slash or full name, so a page such as /apiary still gets its CSP).
+    "/((?!api/|_next/static/|_next/image/|sw\\.js|swe-worker-|manifest\\.webmanifest|icons/|favicon\\.ico).*)",
   ],
 };

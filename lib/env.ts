@@ -86,8 +86,8 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
 
 /**
  * What stops a live server from starting: no AUTH_SECRET of its own, no APP_URL (sign-in links
- * and redirects are built from it, never from a request's Host or X-Forwarded-Host). Empty for
- * the demo. (`next build` does not ask: a build needs no secrets.)
+ * and redirects are built from it, never from a request's Host or X-Forwarded-Host), no proxy in
+ * front (TRUSTED_PROXY_HOPS, which the per-network sign-in limits rely on). Empty for the demo. (`next build` does not ask: a build needs no secrets.)
  */
 export function serverStartProblems(source: Record<string, string | undefined>): string[] {
   const parsed = parseEnv(source);
@@ -100,6 +100,13 @@ export function serverStartProblems(source: Record<string, string | undefined>):
   }
   if (!source.APP_URL) {
     problems.push("APP_URL: set the address people open, e.g. https://tech.example.org");
+  }
+  if (parsed.TRUSTED_PROXY_HOPS === 0) {
+    // `next start` keeps an X-Forwarded-For the client sent, so with no proxy in front the
+    // per-network sign-in limits would count whatever address a client made up.
+    problems.push(
+      "TRUSTED_PROXY_HOPS: serve Plumbline behind a reverse proxy (it also gives it HTTPS) that sets X-Forwarded-For, and set this to the number of proxies in front, usually 1",
+    );
   }
   return problems;
 }

@@ -2,7 +2,11 @@
 import { useMemo, useState } from "react";
 import { FieldError } from "@/components/field-error";
 import { makeRecord } from "@/lib/offline/make-record";
-import { RECORD_TEXT_LIMITS, recordSchema, type TechRecord } from "@/lib/scrutineer/record-schema";
+import {
+  incomingRecordSchema,
+  RECORD_TEXT_LIMITS,
+  type TechRecord,
+} from "@/lib/scrutineer/record-schema";
 import { useTech } from "./tech-context";
 import { voidChoices } from "./void-choices";
 
@@ -41,7 +45,7 @@ export function ChiefVoidForm({ entryId, records }: { entryId: string; records: 
       now: new Date(),
     });
     // The same schema the server checks each synced record with.
-    const parsed = recordSchema.safeParse(made);
+    const parsed = incomingRecordSchema.safeParse(made);
     const next: Errors = {};
     if (!open.some((c) => c.id === target)) next.target = ["Pick the reading or answer to void."];
     const reasonIssues = parsed.success

@@ -34,7 +34,12 @@ function limitKind(pathname: string): SignInLimitKind | null {
   return null;
 }
 
-async function readEmail(request: Request, body: string): Promise<string> {
+/**
+ * The address Auth.js will act on, read the way it reads it (the body's fields as an object, so
+ * the last of a repeated field wins), or null when the body names more than one address: a
+ * limit counted on one address while Auth.js signs in as another would limit nothing.
+ */
+function readEmail(request: Request, body: string): string | null {
   const type = request.headers.get("content-type") ?? "";
   if (type.includes("application/json")) {
     try {
@@ -47,7 +52,9 @@ async function readEmail(request: Request, body: string): Promise<string> {
     }
     return "";
   }
-  return new URLSearchParams(body).get("email") ?? "";
+  const fields = new URLSearchParams(body);
+  if (fields.getAll("email").length > 1) return null;
+  return Object.fromEntries(fields).email ?? "";
 }
 
 function hasSessionCookie(response: Response): boolean {
@@ -68,10 +75,14 @@ export function withSignInLimits(handler: AuthHandler): AuthHandler {
     const kind = limitKind(request.nextUrl.pathname);
     if (!kind) return handler(request);
     const body = await request.text();
-    const who = {
-      email: normalizeEmail(await readEmail(request, body)),
-      clientAddress: clientAddress(request.headers),
-    };
+    const email = readEmail(request, body);
+    if (email === null) {
+      return Response.json(
+        { error: { code: "invalid_input", message: "Send one e-mail address." } },
+        { status: 400 },
+      );
+    }
+    const who = { email: normalizeEmail(email), clientAddress: clientAddress(request.headers) };
     const limit = await takeSignInAttempt(kind, who);
     if (!limit.ok) {
       return Response.json(

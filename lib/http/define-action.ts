@@ -33,8 +33,9 @@ type ActionSpec<S extends z.ZodType, State, A extends ActionAccess<z.infer<S>>> 
 
 /**
  * The one wrapper for server actions, the action form of `defineRoute`: the request checked to
- * come from Plumbline's own origin, the form's fields parsed with zod, the caller authorized,
- * then the handler. Bad input, a missing sign-in, a missing permission and any AppError come
+ * come from Plumbline's own origin, the caller checked to be signed in (unless the action is
+ * public), the form's fields parsed with zod, the caller authorized for the event the form
+ * names, then the handler. Bad input, a missing sign-in, a missing permission and any AppError come
  * back as the form's state (words, field messages); Next's redirects and anything unexpected are
  * rethrown. The body is capped before it is read by proxy.ts (by path) and by Next's
  * `serverActions.bodySizeLimit`.
@@ -50,6 +51,11 @@ export function defineAction<S extends z.ZodType, State, A extends ActionAccess<
         new Request(env.APP_URL, { method: "POST", headers: new Headers(requestHeaders) }),
         appOrigin,
       );
+      // Signed in first where it is needed: a signed-out caller learns nothing from the form's
+      // checks (the event the form names is known only once it is parsed).
+      if (!("public" in spec.access) && !(await getSessionUser())) {
+        throw new AppError("unauthenticated", "Sign in first.");
+      }
       const raw = Object.fromEntries(
         spec.fields.map((name) => [name, form.get(name) ?? undefined]),
       );
@@ -74,8 +80,6 @@ export function defineAction<S extends z.ZodType, State, A extends ActionAccess<
 
 async function authorize<I>(access: ActionAccess<I>, input: I): Promise<Caller> {
   if ("eventIdFrom" in access) {
-    // Signed in first: a signed-out caller learns nothing from the lookup.
-    if (!(await getSessionUser())) throw new AppError("unauthenticated", "Sign in first.");
     const eventId = await access.eventIdFrom(input);
     return authorizeAccess({ permission: access.permission, eventId: () => eventId }, input);
   }

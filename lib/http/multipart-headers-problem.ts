@@ -8,6 +8,8 @@ export function multipartHeadersProblem(body: string, contentType: string): stri
   const boundary = /boundary=(?:"([^"]+)"|([^;\s]+))/i.exec(contentType);
   const mark = boundary?.[1] ?? boundary?.[2];
   if (!mark) return "The form has no boundary.";
+  // Source: RFC 2046 §5.1.1 — the body ends with the close delimiter, "--" boundary "--".
+  if (!body.includes(`--${mark}--`)) return "The form was cut short; send it again.";
   for (const part of body.split(`--${mark}`).slice(1)) {
     if (part.startsWith("--")) break;
     const end = part.indexOf("\r\n\r\n");

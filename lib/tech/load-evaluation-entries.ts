@@ -24,7 +24,16 @@ export async function loadEvaluationEntries({
   const byEntry = new Map<string, TechRecord[]>();
   for (const row of stored) {
     const parsed = recordSchema.safeParse(row);
-    if (!parsed.success) continue; // stored records were validated on the way in
+    if (!parsed.success) {
+      // Stored records were checked on the way in and are read back without text maxima, so
+      // this is damage in the database: say so, never drop a record in silence.
+      console.error(
+        "[verdicts] a stored record does not read as one",
+        row.id,
+        parsed.error.message,
+      );
+      continue;
+    }
     byEntry.set(row.entryId, [...(byEntry.get(row.entryId) ?? []), parsed.data]);
   }
   const display = displayUnits({ length: context.unitSystem });

@@ -89,6 +89,12 @@ export async function syncRecords({
     eventId,
     entryIds: [...new Set(candidates.map((c) => c.record.entryId))],
   });
+  const candidateVoids = candidates.filter((c) => c.record.kind === "void");
+  // A void sent again (a retry after a lost answer) is already counted: never refuse it.
+  const storedVoids = await listRecordAuthors({
+    eventId,
+    recordIds: candidateVoids.map((c) => c.record.id),
+  });
   const voids = await countEntryVoids({
     eventId,
     entryIds: [
@@ -104,9 +110,9 @@ export async function syncRecords({
       };
       return false;
     }
-    if (record.kind !== "void") return true;
-    // Counted with this batch's earlier voids; a replayed void counts again, which only errs
-    // on the side of refusing at the limit.
+    if (record.kind !== "void" || storedVoids.has(record.id)) return true;
+    // Counted with this batch's earlier voids. Two batches for one car at the same moment may
+    // each pass the count (it is not locked): the bound can be passed by one batch at most.
     const already = voids.get(record.entryId) ?? 0;
     if (already >= MAX_VOIDS_PER_ENTRY) {
       results[index] = {

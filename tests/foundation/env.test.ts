@@ -39,9 +39,21 @@ describe("serverStartProblems", () => {
     expect(problems.join("\n")).toMatch(/APP_URL/);
     expect(() => assertServerCanStart({})).toThrow(/refusing to start a live server/);
   });
-  it("starts live with both, and the demo when asked", () => {
+  it("stops a live server with no proxy in front: a client could choose its own address", () => {
+    const problems = serverStartProblems({
+      AUTH_SECRET: realSecret,
+      APP_URL: "https://tech.example.org",
+    });
+    expect(problems).toHaveLength(1);
+    expect(problems[0]).toMatch(/^TRUSTED_PROXY_HOPS: serve Plumbline behind a reverse proxy/);
+  });
+  it("starts live with a secret, an address and a proxy, and the demo when asked", () => {
     expect(
-      serverStartProblems({ AUTH_SECRET: realSecret, APP_URL: "https://tech.example.org" }),
+      serverStartProblems({
+        AUTH_SECRET: realSecret,
+        APP_URL: "https://tech.example.org",
+        TRUSTED_PROXY_HOPS: "1",
+      }),
     ).toEqual([]);
     expect(serverStartProblems({ PLUMBLINE_MODE: "demo" })).toEqual([]);
   });

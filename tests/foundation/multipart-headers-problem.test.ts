@@ -21,6 +21,12 @@ describe("multipartHeadersProblem", () => {
     );
   });
 
+  it("refuses a form cut short before its close delimiter", () => {
+    const cut = form("email").replace("--B--\r\n", "");
+    expect(multipartHeadersProblem(cut, "multipart/form-data; boundary=B")).toMatch(/cut short/);
+    expect(multipartHeadersProblem("junk", "multipart/form-data; boundary=x")).toMatch(/cut short/);
+  });
+
   it("refuses a form with no boundary", () => {
     expect(multipartHeadersProblem(form("x"), "multipart/form-data")).toMatch(/no boundary/);
   });

@@ -12,7 +12,7 @@ import { emailSignInSchema, passwordSignInSchema } from "@/lib/auth/sign-in-sche
 import { carInputSchema } from "@/lib/cars/car-schema";
 import { incomingRecordSchema } from "@/lib/scrutineer/record-schema";
 import { syncRequestSchema } from "@/lib/tech/sync-schema";
-import { callServerAction } from "../support/call-server-action";
+import { callServerAction, listServerActions } from "../support/call-server-action";
 import { countAllRows } from "../support/count-all-rows";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
@@ -194,24 +194,39 @@ describe("Auth.js's own POST endpoints", () => {
     return `203.0.113.${n % 250}`;
   };
 
+  // Half the tries carry a real CSRF token (with its cookie), so the junk reaches Auth.js's own
+  // handling of the address and password, not only its CSRF check.
+  let csrfSession: HttpSession;
+  let csrfToken = "";
+  beforeAll(async () => {
+    csrfSession = new HttpSession(appUrl);
+    const answer = await csrfSession.fetch("/api/auth/csrf");
+    csrfToken = ((await answer.json()) as { csrfToken: string }).csrfToken;
+  });
+
   it(`answers ${RUNS} malformed sign-in posts without a 5xx and signs in nobody`, async () => {
     const field = fc.option(junkText, { nil: undefined });
+    const notAnAddress = fc.option(
+      junkText.filter((email) => !emailSignInSchema.safeParse({ email }).success),
+      { nil: undefined },
+    );
     await fc.assert(
       fc.asyncProperty(
         fc.constantFrom("/api/auth/callback/credentials", "/api/auth/signin/nodemailer"),
+        notAnAddress,
         field,
-        field,
-        field,
+        fc.oneof(fc.constant("valid"), field),
         fc.constantFrom("application/x-www-form-urlencoded", "application/json", "text/plain"),
-        async (path, email, password, csrfToken, type) => {
+        async (path, email, password, csrf, type) => {
           const fields: Record<string, string> = {};
           if (email !== undefined) fields.email = email;
           if (password !== undefined) fields.password = password;
-          if (csrfToken !== undefined) fields.csrfToken = csrfToken;
+          if (csrf === "valid") fields.csrfToken = csrfToken;
+          else if (csrf !== undefined) fields.csrfToken = csrf;
           const body = type.includes("json")
             ? JSON.stringify(fields)
             : new URLSearchParams(fields).toString();
-          const session = new HttpSession(appUrl);
+          const session = csrf === "valid" ? csrfSession : new HttpSession(appUrl);
           const response = await session.fetch(path, {
             method: "POST",
             headers: { "content-type": type, "x-forwarded-for": address() },
@@ -219,6 +234,51 @@ describe("Auth.js's own POST endpoints", () => {
           });
           expect(response.status, await response.text()).toBeLessThan(500);
           expect(session.hasCookie("authjs.session-token")).toBe(false);
+        },
+      ),
+      { numRuns: RUNS },
+    );
+  }, 300_000);
+});
+
+describe("raw posts to pages (server actions with or without the Next-Action header)", () => {
+  // What a hand-made client can send where Next runs server actions: any body, any type, with
+  // or without an action id, broken or oversized. Source of the framing rules: RFC 7578 and
+  // RFC 2046 §5.1.1 (multipart/form-data, the close delimiter).
+  const bodies = fc.oneof(
+    junkBody,
+    fc.constantFrom(
+      '--x\r\nContent-Disposition: form-data; name="a"\r\n\r\nv',
+      '--x\r\nContent-Disposition: form-data; name="\u0000"\r\n\r\nv\r\n--x--\r\n',
+      "--x--\r\n",
+      "",
+    ),
+    fc.integer({ min: 65 * 1024, max: 300 * 1024 }).map((n) => "a".repeat(n)),
+  );
+  it(`answers ${RUNS} raw posts to the sign-in page without a 5xx`, async () => {
+    const actionId = [...listServerActions().entries()].find(([name]) =>
+      name.endsWith("#signInWithPassword"),
+    )?.[1];
+    await fc.assert(
+      fc.asyncProperty(
+        bodies,
+        fc.constantFrom(
+          "multipart/form-data; boundary=x",
+          "multipart/form-data",
+          "application/x-www-form-urlencoded",
+          "text/plain;charset=UTF-8",
+          "application/json",
+        ),
+        fc.constantFrom(actionId ?? "", "0000", undefined),
+        async (body, type, action) => {
+          const headers: Record<string, string> = { "content-type": type };
+          if (action !== undefined) headers["next-action"] = action;
+          const response = await new HttpSession(appUrl).fetch("/sign-in", {
+            method: "POST",
+            headers,
+            body,
+          });
+          expect(response.status, (await response.text()).slice(0, 200)).toBeLessThan(500);
         },
       ),
       { numRuns: RUNS },

@@ -111,6 +111,29 @@ describe("multipart forms as browsers send them", () => {
   });
 });
 
+describe("posts to pages (server actions, with or without the Next-Action header)", () => {
+  it("refuses a form post cut short with 400, with or without an action id (was a 500)", async () => {
+    for (const extra of [{}, { "next-action": "0000" }]) {
+      const response = await new HttpSession(appUrl).fetch("/sign-in", {
+        method: "POST",
+        headers: { "content-type": "multipart/form-data; boundary=x", ...extra },
+        body: "junk",
+      });
+      expect(response.status).toBe(400);
+      expect(await response.text()).toBe("The form was cut short; send it again.");
+    }
+  });
+
+  it("refuses a form post over 64 KB to the sign-in page unread, without an action id too", async () => {
+    const response = await new HttpSession(appUrl).fetch("/sign-in", {
+      method: "POST",
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+      body: `email=${"a".repeat(BODY_LIMITS.signIn)}`,
+    });
+    expect(response.status).toBe(413);
+  });
+});
+
 describe("the origin of cookie-carrying writes", () => {
   it("refuses a sync posted from another site's page with 403", async () => {
     const response = await sam.fetch(`/api/events/${fx.eventId}/sync`, {

@@ -20,6 +20,16 @@ describe("record shapes", () => {
     expect(parsed.data).not.toHaveProperty("receivedAt");
   });
 
+  it("reads back a void stored before reasons had a maximum, which a phone may no longer send", () => {
+    const longVoid = {
+      ...record,
+      kind: "void",
+      payload: { targetRecordId: "0190f0a0-0000-7000-8000-000000000002", reason: "r".repeat(1500) },
+    };
+    expect(recordSchema.safeParse(longVoid).success).toBe(true);
+    expect(incomingRecordSchema.safeParse(longVoid).success).toBe(false);
+  });
+
   it("refuses a record from a phone that carries a field the server does not know", () => {
     expect(incomingRecordSchema.safeParse(record).success).toBe(true);
     const parsed = incomingRecordSchema.safeParse({ ...record, priority: "high" });

@@ -2,7 +2,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 
 const APP = path.resolve(import.meta.dirname, "../../app");
-const METHODS = /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g;
+const METHODS =
+  /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|HEAD|OPTIONS)\b/g;
 const DESTRUCTURED = /export\s+const\s*\{([^}]*)\}\s*=/g;
 
 function walk(dir: string): string[] {
@@ -24,7 +25,7 @@ export function listRouteHandlers(): string[] {
     const methods = new Set([...source.matchAll(METHODS)].map((m) => m[1] as string));
     for (const m of source.matchAll(DESTRUCTURED)) {
       for (const name of (m[1] ?? "").split(",").map((s) => s.trim())) {
-        if (/^(GET|POST|PUT|PATCH|DELETE)$/.test(name)) methods.add(name);
+        if (/^(GET|POST|PUT|PATCH|DELETE|HEAD|OPTIONS)$/.test(name)) methods.add(name);
       }
     }
     for (const method of methods) found.push(`${method} ${route}`);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { RECORD_TEXT_LIMITS, recordSchema } from "@/lib/scrutineer/record-schema";
+import { incomingRecordSchema, RECORD_TEXT_LIMITS } from "@/lib/scrutineer/record-schema";
 import { describeRecordIssue } from "@/lib/tech/describe-record-issue";
 import { uuid7 } from "../scrutineer/fixtures";
 
@@ -13,7 +13,7 @@ const header = {
   deviceTime: "2026-05-16T10:00:00+01:00",
 };
 const refusalOf = (raw: unknown) => {
-  const parsed = recordSchema.safeParse(raw);
+  const parsed = incomingRecordSchema.safeParse(raw);
   if (parsed.success) throw new Error("expected a refusal");
   return describeRecordIssue(parsed.error.issues[0], raw);
 };
