@@ -113,7 +113,7 @@ describe("multipart forms as browsers send them", () => {
 
 describe("posts to pages (server actions, with or without the Next-Action header)", () => {
   it("refuses a form post cut short with 400, with or without an action id (was a 500)", async () => {
-    for (const extra of [{}, { "next-action": "0000" }]) {
+    for (const extra of [{}, { "next-action": "0000" }] as Record<string, string>[]) {
       const response = await new HttpSession(appUrl).fetch("/sign-in", {
         method: "POST",
         headers: { "content-type": "multipart/form-data; boundary=x", ...extra },
