@@ -5,10 +5,23 @@ import { env } from "./lib/env";
 import { actionBodyLimit } from "./lib/http/action-body-limit";
 import { describeBytes } from "./lib/http/body-limits";
 import { contentSecurityPolicy } from "./lib/http/content-security-policy";
+import { jsonDepth } from "./lib/http/json-depth";
 import { multipartHeadersProblem } from "./lib/http/multipart-headers-problem";
 
 const { auth } = NextAuth(authConfig);
 const https = env.APP_URL.startsWith("https:");
+
+/** A server action's arguments (a form's state and the form) nest a few levels at most. */
+const MAX_ACTION_ARGUMENT_DEPTH = 16;
+
+function isActionArguments(text: string): boolean {
+  if (jsonDepth(text) > MAX_ACTION_ARGUMENT_DEPTH) return false;
+  try {
+    return Array.isArray(JSON.parse(text));
+  } catch {
+    return false;
+  }
+}
 
 const plain = (status: number, text: string) =>
   new Response(text, { status, headers: { "content-type": "text/plain; charset=utf-8" } });
@@ -30,9 +43,27 @@ async function refuseBadAction(request: NextRequest): Promise<Response | null> {
     );
   }
   const type = request.headers.get("content-type") ?? "";
-  if (!/^multipart\/form-data/i.test(type)) return null;
-  const problem = multipartHeadersProblem(await request.clone().text(), type);
-  return problem === null ? null : plain(400, problem);
+  if (/^multipart\/form-data/i.test(type)) {
+    const problem = multipartHeadersProblem(await request.clone().text(), type);
+    if (problem !== null) return plain(400, problem);
+    if (!request.headers.has("next-action")) return null;
+    // From a page's script the arguments are the form's fields plus part "0", the arguments
+    // themselves as a JSON array (React's encodeReply); without it Next's decoder fails with 500.
+    const form = await request
+      .clone()
+      .formData()
+      .catch(() => null);
+    const root = form?.get("0");
+    return typeof root === "string" && isActionArguments(root)
+      ? null
+      : plain(400, "The form could not be read; send it again.");
+  }
+  // A page's script sends an action's arguments that hold no form as a JSON array (React's
+  // encodeReply); anything else would fail inside Next's decoder as a 500.
+  if (request.headers.has("next-action") && !isActionArguments(await request.clone().text())) {
+    return plain(400, "The form could not be read; send it again.");
+  }
+  return null;
 }
 
 // Every page request: server-action bodies capped by page; the optimistic redirect to sign-in

@@ -45,6 +45,10 @@ export function defineAction<S extends z.ZodType, State, A extends ActionAccess<
 ): (state: State, form: FormData) => Promise<State> {
   const appOrigin = new URL(env.APP_URL).origin;
   return async (_state, form) => {
+    // Arguments come from the client: a hand-made request can send anything in the form's place.
+    if (!(form instanceof FormData)) {
+      return spec.refuse({ message: "The form could not be read; send it again." }, new FormData());
+    }
     try {
       const requestHeaders = await headers();
       checkOrigin(
