@@ -49,6 +49,8 @@ test("the organizer's class rules and the public paddock board run with nothing 
   const eventId = /\/organizer\/([0-9a-f-]{36})/.exec(page.url())?.[1];
   await page.goto(`/organizer/${eventId}/rules`);
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
+  // Each navigation starts a fresh list: read this page's before leaving it.
+  expect(await violations()).toEqual([]);
   await page.goto(`/board/${eventId}`);
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
   expect(await violations()).toEqual([]);
