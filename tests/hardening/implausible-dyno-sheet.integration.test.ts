@@ -1,8 +1,9 @@
-import { beforeAll, describe, expect, inject, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
+import { makeScratchEntries, removeScratchEntries } from "../support/scratch-entries";
 import { readingRecord, techFixtures } from "../support/tech-fixtures";
 
 // Issue 8, item 13: a dyno sheet that cannot be true is refused with a reason, never thrown, and
@@ -21,7 +22,13 @@ type StoredVerdict = { classChecks: { rules: StoredRule[] }[]; records: { total:
 let fx: Awaited<ReturnType<typeof techFixtures>>;
 let sam: HttpSession;
 let samId: string;
-let entries: { id: string; carNumber: number }[];
+const entries: { id: string; carNumber: number }[] = [];
+afterAll(() =>
+  removeScratchEntries(
+    databaseUrl,
+    entries.map((e) => e.id),
+  ),
+);
 
 /** A sheet in the older STD correction, so the server must re-correct it with its pressures. */
 function sheet(ambient: Record<string, unknown>) {
@@ -58,14 +65,20 @@ beforeAll(async () => {
   sam = new HttpSession(appUrl);
   await sam.signInWithPassword(demo.scrutineer, demo.password);
   samId = await fx.userId(demo.scrutineer);
-  entries = await fx.entryNumbers();
+  // Copies of three measured demo cars (their declarations and class, none of their records),
+  // so the sheets and readings written here change no car another file reads.
+  const demoCars = await fx.entryNumbers();
+  for (const index of [22, 23, 24]) {
+    const [copy] = await makeScratchEntries(databaseUrl, fx.eventId, 1, demoCars[index]?.id);
+    entries.push({ id: copy ?? "", carNumber: 0 });
+  }
 });
 
 describe("dyno sheets that cannot be true (stored before the check existed)", () => {
   it("are refused in the verdict's words, and the other cars in the batch are still recomputed", async () => {
-    const steam = entries[22]?.id ?? ""; // vapour pressure equal to the air pressure
-    const heavyAir = entries[23]?.id ?? ""; // 2,000 mbar: twice any air pressure on Earth
-    const good = entries[24]?.id ?? "";
+    const steam = entries[0]?.id ?? ""; // vapour pressure equal to the air pressure
+    const heavyAir = entries[1]?.id ?? ""; // 2,000 mbar: twice any air pressure on Earth
+    const good = entries[2]?.id ?? "";
     // Written straight to the table, as a sheet saved before the declarations were checked.
     await queryTestDb(databaseUrl, "update entries set declarations = ? where id = ?", [
       JSON.stringify(

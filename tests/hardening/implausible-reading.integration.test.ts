@@ -1,8 +1,9 @@
-import { beforeAll, describe, expect, inject, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
+import { makeScratchEntries, removeScratchEntries } from "../support/scratch-entries";
 import { readingRecord, techFixtures } from "../support/tech-fixtures";
 
 // Issue 8, item 12: a reading that cannot be true (a wing top 99,999 mm above the ground, 64½ in
@@ -19,14 +20,17 @@ type SyncAnswer = {
 let fx: Awaited<ReturnType<typeof techFixtures>>;
 let sam: HttpSession;
 let samId: string;
-let entryId: string;
+let entryId = "";
+afterAll(() => removeScratchEntries(databaseUrl, [entryId]));
 
 beforeAll(async () => {
   fx = await techFixtures(databaseUrl);
   sam = new HttpSession(appUrl);
   await sam.signInWithPassword(demo.scrutineer, demo.password);
   samId = await fx.userId(demo.scrutineer);
-  entryId = (await fx.entryNumbers())[25]?.id ?? "";
+  // A car of this file's own (a copy of a measured demo car, without its records).
+  const template = (await fx.entryNumbers())[25]?.id;
+  entryId = (await makeScratchEntries(databaseUrl, fx.eventId, 1, template))[0] ?? "";
 });
 
 describe("a reading that cannot be true (POST /sync)", () => {

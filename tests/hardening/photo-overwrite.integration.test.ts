@@ -4,12 +4,13 @@
 import { PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { PNG } from "pngjs";
 import { v7 as uuidv7 } from "uuid";
-import { beforeAll, describe, expect, inject, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
+import { makeScratchEntries, removeScratchEntries } from "../support/scratch-entries";
 import { techFixtures } from "../support/tech-fixtures";
 import { testPorts } from "../support/test-env";
 
@@ -20,7 +21,8 @@ let fx: Awaited<ReturnType<typeof techFixtures>>;
 let sam: HttpSession;
 let alex: HttpSession;
 let samId: string;
-let entryId: string;
+let entryId = "";
+afterAll(() => removeScratchEntries(databaseUrl, [entryId]));
 
 /** A small real PNG (pngjs, npm) whose pixels are `shade`: different shades, different bytes. */
 function png(shade: number): Uint8Array<ArrayBuffer> {
@@ -62,7 +64,8 @@ beforeAll(async () => {
   alex = new HttpSession(appUrl);
   await alex.signInWithPassword(demo.scrutineer2, demo.password);
   samId = await fx.userId(demo.scrutineer);
-  entryId = (await fx.entryNumbers()).at(-5)?.id ?? "";
+  // A car of this file's own, so what it writes changes no car another file reads.
+  entryId = (await makeScratchEntries(databaseUrl, fx.eventId, 1))[0] ?? "";
 });
 
 describe("a photo cannot be overwritten", () => {
