@@ -129,6 +129,13 @@ export function ReadingEntry({
     await keep(payload);
   };
 
+  /** Back to the number: the hold goes, the field is focused with its text selected. */
+  const fixHeld = () => {
+    setHeld(null);
+    input.current?.focus();
+    input.current?.select();
+  };
+
   const keep = async (payload: ReadingPayload) => {
     setHeld(null);
     await record(
@@ -232,11 +239,7 @@ export function ReadingEntry({
           <ImplausibleReadingWarning
             why={held.implausible}
             onSaveAnyway={() => void keep(held.payload)}
-            onFix={() => {
-              setHeld(null);
-              input.current?.focus();
-              input.current?.select();
-            }}
+            onFix={fixHeld}
           />
         ) : held ? (
           <ReadingMismatchWarning
@@ -246,11 +249,7 @@ export function ReadingEntry({
             earlierCount={held.mismatch.earlierCount}
             allowed={formatReadingValue(dimension, held.mismatch.allowedDifference, unitSystem)}
             onSaveAnyway={() => void keep(held.payload)}
-            onFix={() => {
-              setHeld(null);
-              input.current?.focus();
-              input.current?.select();
-            }}
+            onFix={fixHeld}
           />
         ) : (
           <button type="submit" className="btn-primary w-full" disabled={!canWrite}>

@@ -1,4 +1,8 @@
-/** How far ahead of the server's clock a phone's clock may run before its records are refused. */
+/**
+ * How far ahead of the server's clock a phone's clock may run before its records are refused:
+ * the same grace a pass gets for a slow phone clock (lib/passes). Common practice (no source):
+ * a phone on network time is within seconds; minutes cover one set by hand.
+ */
 export const MAX_DEVICE_CLOCK_AHEAD_MINUTES = 5;
 
 /**
