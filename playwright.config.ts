@@ -46,5 +46,13 @@ export default defineConfig({
       reuseExistingServer: false,
       timeout: 90_000,
     },
+    {
+      // The job worker: re-derives verdicts after a sync and sends the e-mail.
+      command: "node_modules/.bin/tsx --conditions=react-server scripts/worker.ts",
+      env: { ...stringEnv(process.env), PLUMBLINE_MODE: "demo", PLUMBLINE_WORKER_POLL_MS: "50" },
+      wait: { stdout: /\[worker\] ready/ },
+      reuseExistingServer: false,
+      timeout: 30_000,
+    },
   ],
 });

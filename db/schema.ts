@@ -340,6 +340,8 @@ export const verdicts = mysqlTable(
       .references(() => ruleSetVersions.id),
     result: json("result").notNull(),
     recordCount: int("record_count").notNull(),
+    /** SHA-256 of the stored `result`: a recompute that derives the same result writes no JSON. */
+    resultHash: key("result_hash", 64),
     computedAt: datetime("computed_at", { mode: "date", fsp: 3 }).notNull(),
   },
   (t) => [
@@ -451,9 +453,45 @@ export const mailLog = mysqlTable(
     messageId: key("message_id", 255),
     status: mysqlEnum("status", ["sent", "failed"]).notNull(),
     error: varchar("error", { length: 500 }),
+    /** The job that sent it (lib/jobs): a job run again finds its mail already sent. */
+    jobId: bigint("job_id", { mode: "number", unsigned: true }),
     createdAt: createdAt(),
   },
-  (t) => [index("mail_log_event_idx").on(t.eventId, t.createdAt)],
+  (t) => [
+    index("mail_log_event_idx").on(t.eventId, t.createdAt),
+    uniqueIndex("mail_log_job_sent_idx").on(t.jobId),
+  ],
+);
+
+export const jobStatuses = ["queued", "running", "done", "failed"] as const;
+
+/**
+ * The durable job queue (lib/jobs, scripts/worker.ts): work taken off the request path —
+ * re-deriving verdicts after a sync, sending e-mail. A worker claims due jobs with
+ * `FOR UPDATE SKIP LOCKED` and holds each for a lease it renews while working; a job whose worker
+ * died is taken again when its lease runs out. Times are the database's own (UTC_TIMESTAMP), so
+ * every worker and app process agrees on them.
+ */
+export const jobs = mysqlTable(
+  "jobs",
+  {
+    id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
+    kind: key("kind", 40).notNull(),
+    /** Enqueuing the same key twice adds one job (e.g. one e-mail per verdict change and person). */
+    dedupeKey: key("dedupe_key", 255),
+    payload: json("payload").notNull(),
+    status: mysqlEnum("status", jobStatuses).notNull().default("queued"),
+    attempts: int("attempts").notNull().default(0),
+    runAfter: datetime("run_after", { mode: "date", fsp: 3 }).notNull(),
+    lockedUntil: datetime("locked_until", { mode: "date", fsp: 3 }),
+    lastError: varchar("last_error", { length: 1000 }),
+    createdAt: createdAt(),
+    doneAt: datetime("done_at", { mode: "date", fsp: 3 }),
+  },
+  (t) => [
+    uniqueIndex("jobs_dedupe_idx").on(t.dedupeKey),
+    index("jobs_due_idx").on(t.status, t.runAfter),
+  ],
 );
 
 export const auditLog = mysqlTable(

@@ -48,6 +48,13 @@ const envSchema = z
       (v) => (v === "" ? undefined : v),
       z.iso.datetime({ offset: true }).optional(),
     ),
+    /** How long a worker holds a job before another may take it (it renews while working). */
+    PLUMBLINE_JOB_LEASE_MS: z.coerce.number().int().min(1000).max(600_000).default(15_000),
+    /** How often an idle worker looks for due jobs. */
+    PLUMBLINE_WORKER_POLL_MS: z.coerce.number().int().min(20).max(10_000).default(150),
+    /** Demo and tests only: named places where the process kills itself, for the fault tests
+     *  (lib/jobs/fault-point.ts), comma-separated, each optionally `name@n` (the n-th time). */
+    PLUMBLINE_FAULTS: z.string().default(""),
   })
   .superRefine((env, ctx) => {
     if (env.PLUMBLINE_MODE === "live" && env.AUTH_SECRET === DEMO_AUTH_SECRET) {
@@ -55,6 +62,13 @@ const envSchema = z
         code: "custom",
         path: ["AUTH_SECRET"],
         message: "the demo's published secret is refused in live mode; set a real AUTH_SECRET",
+      });
+    }
+    if (env.PLUMBLINE_FAULTS !== "" && env.PLUMBLINE_MODE !== "demo") {
+      ctx.addIssue({
+        code: "custom",
+        path: ["PLUMBLINE_FAULTS"],
+        message: "fault points are for the tests only: unset it, or set PLUMBLINE_MODE=demo",
       });
     }
     if (env.PLUMBLINE_FAKE_NOW !== undefined && env.PLUMBLINE_MODE !== "demo") {

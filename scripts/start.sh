@@ -2,7 +2,8 @@
 # npm start: everything a fresh Debian machine with Node 20 needs, then the app on 127.0.0.1:3000.
 # Installs what is missing (npm packages, MariaDB), starts MariaDB and the local service fakes on
 # loopback, applies migrations, seeds the demo when the database is empty, builds when the code
-# changed, and serves. Ctrl-C stops the app and the fakes; MariaDB keeps running for next time
+# changed, starts the job worker and serves. Ctrl-C stops the app, the worker and the fakes;
+# MariaDB keeps running for next time
 # (`npm run db:down` stops it).
 set -euo pipefail
 source "$(dirname "$0")/lib.sh"
@@ -32,7 +33,10 @@ fi
 
 node_modules/.bin/tsx scripts/services.ts &
 SERVICES_PID=$!
-trap 'kill "$SERVICES_PID" 2>/dev/null || true' EXIT INT TERM
+# The job worker: re-derives verdicts after a sync and sends the e-mail, off the request path.
+node_modules/.bin/tsx --conditions=react-server scripts/worker.ts &
+WORKER_PID=$!
+trap 'kill "$SERVICES_PID" "$WORKER_PID" 2>/dev/null || true' EXIT INT TERM
 mailbox_port="${MAILBOX_URL:-http://127.0.0.1:2580}"; mailbox_port="${mailbox_port##*:}"; mailbox_port="${mailbox_port%%/*}"
 s3_port="${S3_ENDPOINT:-http://127.0.0.1:4568}"; s3_port="${s3_port##*:}"; s3_port="${s3_port%%/*}"
 wait_port "${SMTP_PORT:-2525}" && wait_port "$mailbox_port" && wait_port "$s3_port" || { say "local service fakes did not start"; exit 1; }

@@ -1,56 +1,41 @@
 import "server-only";
-import { inArray } from "drizzle-orm";
+import { inArray, sql } from "drizzle-orm";
 import type { TechRecord } from "../../lib/scrutineer/record-schema";
 import { stableStringify } from "../../lib/scrutineer/stable-stringify";
-import { getDb } from "../client";
+import type { Tx } from "../run-transaction";
 import { records } from "../schema";
 
 export type InsertOutcome = "stored" | "duplicate" | "conflict";
 
 /**
- * Store records idempotently, all in one transaction: a record whose id is already stored with
- * the same content is a duplicate (nothing written); the same id with other content is a conflict
- * (nothing written). Records are never updated.
+ * Store a batch idempotently inside the caller's transaction with one statement that takes no
+ * lock another phone's batch can wait on: `INSERT … ON DUPLICATE KEY UPDATE id = id` (a new id
+ * takes only an insert-intention lock, and those never conflict with each other; an id already
+ * stored is left as it was, and unlike `INSERT IGNORE` no other error is turned into a warning).
+ * Then one read of the batch's ids says what happened: a row carrying this request's receive
+ * time is ours (stored); any other row was there before — the same content is a duplicate, other
+ * content a conflict. Records are never updated.
  */
 export async function insertRecords({
+  tx,
   eventId,
   batch,
   receivedAt,
 }: {
+  tx: Tx;
   eventId: string;
   batch: TechRecord[];
   receivedAt: Date;
 }): Promise<Map<string, InsertOutcome>> {
   const outcomes = new Map<string, InsertOutcome>();
-  if (batch.length === 0) return outcomes;
-  await getDb().transaction(async (tx) => {
-    const existing = await tx
-      .select()
-      .from(records)
-      .where(
-        inArray(
-          records.id,
-          batch.map((r) => r.id),
-        ),
-      )
-      .for("update");
-    const byId = new Map(existing.map((row) => [row.id, row]));
-    const fresh: (typeof records.$inferInsert)[] = [];
-    for (const record of batch) {
-      const stored = byId.get(record.id);
-      if (stored) {
-        const same =
-          stored.eventId === eventId &&
-          stored.entryId === record.entryId &&
-          stored.kind === record.kind &&
-          stored.officialId === record.officialId &&
-          stableStringify(stored.payload) === stableStringify(record.payload);
-        outcomes.set(record.id, same ? "duplicate" : "conflict");
-        continue;
-      }
-      if (outcomes.has(record.id)) continue; // the same id twice in one batch: keep the first
-      outcomes.set(record.id, "stored");
-      fresh.push({
+  // The same id twice in one batch: keep the first.
+  const seen = new Set<string>();
+  const unique = batch.filter((r) => !seen.has(r.id) && seen.add(r.id));
+  if (unique.length === 0) return outcomes;
+  await tx
+    .insert(records)
+    .values(
+      unique.map((record) => ({
         id: record.id,
         eventId,
         entryId: record.entryId,
@@ -60,9 +45,33 @@ export async function insertRecords({
         deviceId: record.deviceId,
         deviceTime: new Date(record.deviceTime),
         receivedAt,
-      });
-    }
-    if (fresh.length > 0) await tx.insert(records).values(fresh);
-  });
+      })),
+    )
+    .onDuplicateKeyUpdate({ set: { id: sql`${records.id}` } });
+  const stored = new Map(
+    (
+      await tx
+        .select()
+        .from(records)
+        .where(
+          inArray(
+            records.id,
+            unique.map((r) => r.id),
+          ),
+        )
+    ).map((row) => [row.id, row]),
+  );
+  for (const record of unique) {
+    const row = stored.get(record.id);
+    const same =
+      row !== undefined &&
+      row.eventId === eventId &&
+      row.entryId === record.entryId &&
+      row.kind === record.kind &&
+      row.officialId === record.officialId &&
+      stableStringify(row.payload) === stableStringify(record.payload);
+    const ours = row !== undefined && row.receivedAt.getTime() === receivedAt.getTime();
+    outcomes.set(record.id, !same ? "conflict" : ours ? "stored" : "duplicate");
+  }
   return outcomes;
 }

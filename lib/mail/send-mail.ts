@@ -12,8 +12,16 @@ export type OutgoingMail = {
   eventId?: string | null;
 };
 
-/** Send one e-mail and record it in the mail log, whether it went or not. */
-export async function sendMail(mail: OutgoingMail): Promise<void> {
+/**
+ * Send one e-mail and record it in the mail log, whether it went or not. From a job, the mail
+ * carries a Message-ID made from the job, so a copy sent again after a crash is the same message.
+ */
+export async function sendMail(
+  mail: OutgoingMail,
+  { jobId }: { jobId?: number } = {},
+): Promise<void> {
+  const messageId =
+    jobId === undefined ? undefined : `<job-${jobId}.${new URL(env.APP_URL).hostname}@plumbline>`;
   try {
     const info = await getMailTransport().sendMail({
       from: env.MAIL_FROM,
@@ -21,8 +29,15 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
       subject: mail.subject,
       text: mail.text,
       html: mail.html,
+      ...(messageId ? { messageId } : {}),
     });
-    await logMail({ ...mail, toAddress: mail.to, messageId: info.messageId, status: "sent" });
+    await logMail({
+      ...mail,
+      toAddress: mail.to,
+      messageId: info.messageId,
+      status: "sent",
+      jobId: jobId ?? null,
+    });
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     await logMail({ ...mail, toAddress: mail.to, status: "failed", error: message });

@@ -5,13 +5,13 @@ import { pinRuleSetVersion } from "../../db/queries/pin-rule-set-version";
 import { clock } from "../clock";
 import { AppError } from "../errors";
 import { ruleSetSchema } from "../scrutineer/rule-set-schema";
-import { notifyVerdictChanges } from "../tech/notify-verdict-changes";
 import { recomputeVerdicts } from "../tech/recompute-verdicts";
 import { verdictMoved } from "../tech/verdict-moved";
 
 /**
  * Judge the event's cars by another saved version of its rule set: pin it (locking it for good),
- * recompute every verdict from the records, and e-mail the drivers whose verdict changed.
+ * recompute every verdict from the records, and queue e-mails to the drivers whose verdict changed
+ * (the worker sends them).
  * Refused when an entry's declared class is missing from that version.
  */
 export async function pinRuleSet({
@@ -40,8 +40,7 @@ export async function pinRuleSet({
   }
   const pinned = await pinRuleSetVersion({ eventId, versionId, pinnedBy: userId, now });
   if (pinned.previousVersion === null) return { ...pinned, changed: 0, mailed: 0 };
-  const changes = await recomputeVerdicts({ eventId, now });
+  const { changes, mailsQueued } = await recomputeVerdicts({ eventId, now });
   const changed = changes.filter(verdictMoved).length;
-  const mailed = await notifyVerdictChanges({ eventId, changes, ruleSet });
-  return { ...pinned, changed, mailed };
+  return { ...pinned, changed, mailed: mailsQueued };
 }

@@ -1,12 +1,20 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
+import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
+import { listEntryContacts } from "../../db/queries/list-entry-contacts";
 import { saveVerdicts } from "../../db/queries/save-verdicts";
+import { runTransaction } from "../../db/run-transaction";
+import { env } from "../env";
 import { AppError } from "../errors";
 import { evaluateEntry } from "../scrutineer/evaluate-entry";
+import { stableStringify } from "../scrutineer/stable-stringify";
 import { uncomputedVerdict } from "../scrutineer/uncomputed-verdict";
 import type { Verdict, VerdictStatus } from "../scrutineer/verdict-schema";
 import { loadEvaluationEntries } from "./load-evaluation-entries";
 import { needsChiefScrutineer } from "./needs-chief-scrutineer";
+import { verdictChangeMails } from "./verdict-change-mails";
+import { verdictMoved } from "./verdict-moved";
 
 export type VerdictChange = {
   entryId: string;
@@ -16,10 +24,11 @@ export type VerdictChange = {
 
 /**
  * Re-derive the verdicts of some entries (all when `entryIds` is omitted) from all their records
- * and the event's pinned rule set, store them, and report each with its previous status. Each
- * entry on its own: an evaluation that throws (a fault in the code) is logged and stored as a
- * verdict that waits for the chief scrutineer and says it could not be computed
- * (`uncomputedVerdict`), and the other entries' verdicts are stored as usual.
+ * and the event's pinned rule set (read once), then, in one transaction, store them and enqueue
+ * the e-mails of the verdicts that changed — so a recompute run twice (its worker died before
+ * marking the job done) finds nothing changed the second time and mails nobody twice. Each entry
+ * on its own: an evaluation that throws (a fault in the code) is logged and stored as a verdict
+ * that waits for the chief scrutineer and says it could not be computed (`uncomputedVerdict`).
  */
 export async function recomputeVerdicts({
   eventId,
@@ -29,11 +38,10 @@ export async function recomputeVerdicts({
   eventId: string;
   entryIds?: string[];
   now: Date;
-}): Promise<VerdictChange[]> {
+}): Promise<{ changes: VerdictChange[]; mailsQueued: number }> {
   const context = await getEventRuleSet({ eventId });
   if (!context) throw new AppError("not_found", "No such event.");
   const inputs = await loadEvaluationEntries({ context, entryIds });
-  // Entry by entry: one entry whose evaluation fails never stops the others' verdicts.
   const results = inputs.map((entryInput) => {
     const input = { ...entryInput, ruleSet: context.ruleSet };
     try {
@@ -47,23 +55,43 @@ export async function recomputeVerdicts({
       return { entryId: input.entry.entryId, verdict: uncomputedVerdict(input, problem) };
     }
   });
-  const before = await saveVerdicts({
-    eventId,
-    ruleSetVersionId: context.ruleSetVersionId,
-    computedAt: now,
-    rows: results.map(({ entryId, verdict }) => ({
-      entryId,
-      status: verdict.status,
-      finalClass: verdict.classId,
-      needsChief: needsChiefScrutineer(verdict),
-      reason: verdict.reason,
-      result: verdict,
-      recordCount: verdict.records.total,
-    })),
-  });
-  return results.map(({ entryId, verdict }) => ({
+  const rows = results.map(({ entryId, verdict }) => ({
     entryId,
-    before: before.get(entryId) ?? null,
-    verdict,
+    status: verdict.status,
+    finalClass: verdict.classId,
+    needsChief: needsChiefScrutineer(verdict),
+    reason: verdict.reason,
+    result: verdict,
+    resultHash: createHash("sha256").update(stableStringify(verdict)).digest("hex"),
+    recordCount: verdict.records.total,
   }));
+  return runTransaction(async (tx) => {
+    const before = await saveVerdicts({
+      tx,
+      eventId,
+      ruleSetVersionId: context.ruleSetVersionId,
+      computedAt: now,
+      rows,
+    });
+    const changes = results.map(({ entryId, verdict }) => ({
+      entryId,
+      before: before.get(entryId) ?? null,
+      verdict,
+    }));
+    const moved = changes.filter((c) => c.verdict.status !== "waiting" && verdictMoved(c));
+    const contacts =
+      moved.length === 0
+        ? []
+        : await listEntryContacts({ eventId, entryIds: moved.map((c) => c.entryId) });
+    const mails = verdictChangeMails({
+      eventId,
+      changes,
+      contacts,
+      ruleSet: context.ruleSet,
+      computedAt: now,
+      appUrl: env.APP_URL,
+    });
+    await enqueueJobs(mails, tx);
+    return { changes, mailsQueued: mails.length };
+  });
 }

@@ -1,28 +1,30 @@
 import "server-only";
 import { countEntryVoids } from "../../db/queries/count-entry-voids";
-import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
+import { eventExists } from "../../db/queries/event-exists";
 import { insertRecords } from "../../db/queries/insert-records";
+import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { listEventEntryIds } from "../../db/queries/list-event-entry-ids";
 import { listRecordAuthors } from "../../db/queries/list-record-authors";
+import { runTransaction } from "../../db/run-transaction";
 import type { SessionUser } from "../auth/get-session-user";
 import type { Role } from "../auth/roles";
 import { AppError } from "../errors";
+import { faultPoint } from "../jobs/fault-point";
+import { RECOMPUTE_VERDICTS } from "../jobs/job-kinds";
 import { MAX_VOIDS_PER_ENTRY } from "../scrutineer/max-voids-per-entry";
 import { incomingRecordSchema, type TechRecord } from "../scrutineer/record-schema";
 import { describeRecordIssue } from "./describe-record-issue";
 import { deviceTimeProblem } from "./device-time-problem";
-import { notifyVerdictChanges } from "./notify-verdict-changes";
-import { recomputeVerdicts } from "./recompute-verdicts";
 import { recordRefusal } from "./record-refusal";
 import type { SyncRecordResult, SyncResponse } from "./sync-schema";
-import { toPackVerdict } from "./to-pack-verdict";
 
 /**
  * Accept a batch from a phone's outbox: check every record on its own (shape, who made it, the
  * permission for its kind and, for a void, whose record it voids; that its entry is in this
- * event), store the good ones idempotently in one transaction, re-derive the verdicts of the
- * entries touched, tell entrants what changed, and answer per record. A bad record never stops
- * the good ones; nothing is silently dropped. Refusals are worded for the scrutineer.
+ * event), then in one transaction store the good ones idempotently and enqueue the re-derivation
+ * of the verdicts of the entries they touch (the worker does it, and e-mails what changed), and
+ * answer per record with the entries whose verdict is on its way. A bad record never stops the
+ * good ones; nothing is silently dropped. Refusals are worded for the scrutineer.
  */
 export async function syncRecords({
   eventId,
@@ -37,8 +39,7 @@ export async function syncRecords({
   rawRecords: unknown[];
   now: Date;
 }): Promise<SyncResponse> {
-  const context = await getEventRuleSet({ eventId });
-  if (!context) throw new AppError("not_found", "No such event.");
+  if (!(await eventExists({ eventId }))) throw new AppError("not_found", "No such event.");
 
   const results: SyncRecordResult[] = new Array(rawRecords.length);
   const parsed = rawRecords.map((raw) => incomingRecordSchema.safeParse(raw));
@@ -126,12 +127,22 @@ export async function syncRecords({
     return true;
   });
 
-  const outcomes = await insertRecords({
-    eventId,
-    batch: accepted.map((a) => a.record),
-    receivedAt: now,
+  const batch = accepted.map((a) => a.record);
+  const outcomes = await runTransaction(async (tx) => {
+    const stored = await insertRecords({ tx, eventId, batch, receivedAt: now });
+    const touched = [
+      ...new Set(batch.filter((r) => stored.get(r.id) === "stored").map((r) => r.entryId)),
+    ];
+    if (touched.length > 0) {
+      await enqueueJobs(
+        [{ kind: RECOMPUTE_VERDICTS, payload: { eventId, entryIds: touched } }],
+        tx,
+      );
+    }
+    return stored;
   });
-  const touched = new Set<string>();
+  faultPoint("sync:stored");
+  const pending = new Set<string>();
   for (const { index, record } of accepted) {
     const outcome = outcomes.get(record.id);
     if (outcome === "conflict") {
@@ -142,17 +153,8 @@ export async function syncRecords({
       };
     } else {
       results[index] = { id: record.id, status: outcome === "duplicate" ? "duplicate" : "stored" };
-      touched.add(record.entryId);
+      if (outcome === "stored") pending.add(record.entryId);
     }
   }
-
-  const changes = await recomputeVerdicts({ eventId, entryIds: [...touched], now });
-  await notifyVerdictChanges({ eventId, changes, ruleSet: context.ruleSet });
-  return {
-    results,
-    receivedAt: now.toISOString(),
-    verdicts: changes.map(({ entryId, verdict }) =>
-      toPackVerdict({ entryId, verdict, computedAt: now }),
-    ),
-  };
+  return { results, receivedAt: now.toISOString(), verdictsPending: [...pending] };
 }

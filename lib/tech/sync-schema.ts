@@ -1,5 +1,4 @@
 import { z } from "zod";
-import type { PackVerdict } from "../offline/event-pack-schema";
 
 /** Most records a phone may send in one batch; the outbox sends smaller batches. */
 export const MAX_SYNC_BATCH = 200;
@@ -14,11 +13,10 @@ export type SyncRecordResult =
   | { id: string; status: "stored" | "duplicate" }
   | { id: string | null; status: "refused"; reason: string };
 
-/** A verdict in the sync answer: the same short form as the event pack's. */
-export type SyncVerdict = PackVerdict;
-
 export type SyncResponse = {
   results: SyncRecordResult[];
-  verdicts: SyncVerdict[];
+  /** Entries that got new records: the worker is re-deriving their verdicts (the phone's next
+   *  pack refresh brings them). */
+  verdictsPending: string[];
   receivedAt: string;
 };

@@ -1,5 +1,6 @@
 import { v7 as uuidv7 } from "uuid";
 import { beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -65,7 +66,7 @@ function override(entryId: string, payload: Record<string, unknown>, offsetMs: n
 async function sync(record: unknown): Promise<PackVerdict | undefined> {
   const response = await postSync(chief, fx.eventId, "chief-phone", [record]);
   expect(response.status).toBe(200);
-  const body = (await response.json()) as {
+  const body = (await readSyncAnswer(chief, fx.eventId, response)) as {
     results: { status: string }[];
     verdicts: PackVerdict[];
   };

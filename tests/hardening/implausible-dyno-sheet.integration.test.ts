@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -110,7 +111,7 @@ describe("dyno sheets that cannot be true (stored before the check existed)", ()
     );
     const response = await postSync(sam, fx.eventId, "phone-dyno", batch);
     expect(response.status).toBe(200);
-    const body = (await response.json()) as SyncAnswer;
+    const body = (await readSyncAnswer(sam, fx.eventId, response)) as SyncAnswer;
     expect(body.results.map((r) => r.status)).toEqual(["stored", "stored", "stored"]);
     expect(body.verdicts.map((v) => v.entryId).sort()).toEqual([steam, heavyAir, good].sort());
 

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -56,7 +57,7 @@ describe("a reading that cannot be true (POST /sync)", () => {
     });
     const response = await postSync(sam, fx.eventId, "phone-implausible", [wingTop, overhang]);
     expect(response.status).toBe(200);
-    const body = (await response.json()) as SyncAnswer;
+    const body = (await readSyncAnswer(sam, fx.eventId, response)) as SyncAnswer;
     expect(body.results.map((r) => r.status)).toEqual(["stored", "stored"]);
     const verdict = body.verdicts.find((v) => v.entryId === entryId);
     expect(verdict?.flags).toContain("implausible-reading");

@@ -1,5 +1,6 @@
 import { v7 as uuidv7 } from "uuid";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -49,7 +50,10 @@ const voidOf = (entryId: string, targetRecordId: string, officialId: string, at 
 
 async function sync(session: HttpSession, records: unknown[]) {
   const response = await postSync(session, fx.eventId, "phone-void-chain", records);
-  return { status: response.status, body: (await response.json()) as SyncAnswer };
+  return {
+    status: response.status,
+    body: (await readSyncAnswer(session, fx.eventId, response)) as SyncAnswer,
+  };
 }
 
 beforeAll(async () => {

@@ -1,11 +1,13 @@
 // Vitest global setup for *.integration.test.ts: a fresh MariaDB database with migrations and the
-// demo data, the local mail and storage fakes, and the built app (`next start`) on test ports.
+// demo data, the local mail and storage fakes, the built app (`next start`) on test ports and the
+// job worker beside it.
 import path from "node:path";
 import type { TestProject } from "vitest/node";
 import { startS3Fake } from "../../scripts/fakes/s3-fake";
 import { startSmtpFake } from "../../scripts/fakes/smtp-fake";
 import { prepareDatabase } from "./prepare-database";
 import { startAppServer } from "./start-app-server";
+import { startWorker } from "./start-worker";
 import { createTestDatabase } from "./test-database";
 import { testPorts, testServiceEnv } from "./test-env";
 
@@ -34,11 +36,17 @@ export default async function setup(project: TestProject) {
     bucket: "plumbline-uploads",
   });
   const app = await startAppServer({ port: testPorts.app, env });
+  // Fast polling and short leases: the tests wait for verdicts and take over a dead worker's jobs.
+  const worker = await startWorker({
+    ...env,
+    PLUMBLINE_WORKER_POLL_MS: "50",
+    PLUMBLINE_JOB_LEASE_MS: "3000",
+  });
   project.provide("appUrl", app.url);
   project.provide("databaseUrl", database.url);
   project.provide("mailboxUrl", env.MAILBOX_URL ?? "");
   return async () => {
-    await app.stop();
+    await Promise.all([app.stop(), worker.stop()]);
     await Promise.allSettled([smtp.close(), s3.close()]);
     await database.drop();
   };

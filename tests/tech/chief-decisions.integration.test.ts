@@ -1,5 +1,6 @@
 import { v7 as uuidv7 } from "uuid";
 import { beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -46,7 +47,7 @@ function overrideRecord(entryId: string, payload: Record<string, unknown>, at = 
 async function sync(records: unknown[]) {
   const response = await postSync(chief, fx.eventId, "chief-phone", records);
   expect(response.status).toBe(200);
-  return (await response.json()) as {
+  return (await readSyncAnswer(chief, fx.eventId, response)) as {
     results: { status: string }[];
     verdicts: PackVerdict[];
   };

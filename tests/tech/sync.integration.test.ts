@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -19,7 +20,10 @@ let scrutineerId: string;
 
 async function sync(session: HttpSession, records: unknown[]) {
   const response = await postSync(session, fx.eventId, "test-device", records);
-  return { status: response.status, body: (await response.json()) as SyncAnswer };
+  return {
+    status: response.status,
+    body: (await readSyncAnswer(session, fx.eventId, response)) as SyncAnswer,
+  };
 }
 
 beforeAll(async () => {

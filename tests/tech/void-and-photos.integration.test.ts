@@ -2,6 +2,7 @@ import { PNG } from "pngjs";
 import { v7 as uuidv7 } from "uuid";
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
+import { readSyncAnswer } from "../support/await-verdicts";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
@@ -25,7 +26,10 @@ let entryId: string;
 
 async function sync(session: HttpSession, records: unknown[]) {
   const response = await postSync(session, fx.eventId, "test-device", records);
-  return { status: response.status, body: (await response.json()) as SyncAnswer };
+  return {
+    status: response.status,
+    body: (await readSyncAnswer(session, fx.eventId, response)) as SyncAnswer,
+  };
 }
 
 const voidOf = (targetRecordId: string, officialId: string, at = new Date()) => ({

@@ -93,8 +93,8 @@ export default async function RuleSetPage({
         >
           Version {pinnedRuleSet.version} is pinned. {justPinned.changed}{" "}
           {justPinned.changed === 1 ? "verdict" : "verdicts"} changed; {justPinned.mailed}{" "}
-          {justPinned.mailed === 1 ? "e-mail" : "e-mails"} sent. Phones use it once their event pack
-          is refreshed.
+          {justPinned.mailed === 1 ? "e-mail" : "e-mails"} on their way to drivers. Phones use it
+          once their event pack is refreshed.
         </p>
       ) : null}
 

@@ -1,0 +1,31 @@
+import "server-only";
+import { and, eq, inArray, sql } from "drizzle-orm";
+import { getDb } from "../../client";
+import { jobs } from "../../schema";
+
+/**
+ * Put failed jobs back in the queue to run after `delayMs`, or give them up (`failed`, kept for
+ * an official to see) once `giveUp` says so.
+ */
+export async function retryJobs({
+  ids,
+  error,
+  delayMs,
+  giveUp,
+}: {
+  ids: number[];
+  error: string;
+  delayMs: number;
+  giveUp: boolean;
+}): Promise<void> {
+  if (ids.length === 0) return;
+  await getDb()
+    .update(jobs)
+    .set({
+      status: giveUp ? "failed" : "queued",
+      runAfter: sql`utc_timestamp(3) + interval ${Math.round(delayMs * 1000)} microsecond`,
+      lockedUntil: null,
+      lastError: error.slice(0, 1000),
+    })
+    .where(and(inArray(jobs.id, ids), eq(jobs.status, "running")));
+}

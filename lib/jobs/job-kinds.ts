@@ -1,0 +1,22 @@
+import { z } from "zod";
+
+/** Re-derive the verdicts of some entries of an event after records arrived. */
+export const RECOMPUTE_VERDICTS = "recompute-verdicts";
+/** Send one e-mail (already composed) to one person. */
+export const SEND_MAIL = "send-mail";
+
+export const recomputeVerdictsPayload = z.object({
+  eventId: z.string(),
+  entryIds: z.array(z.string()),
+});
+
+export const sendMailPayload = z.object({
+  to: z.string(),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string(),
+  kind: z.string(),
+  eventId: z.string().nullable().optional(),
+});
+
+export type SendMailPayload = z.infer<typeof sendMailPayload>;
