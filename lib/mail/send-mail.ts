@@ -1,5 +1,6 @@
 import "server-only";
 import { logMail } from "../../db/queries/log-mail";
+import { whileDatabaseAway } from "../../db/while-database-away";
 import { env } from "../env";
 import { getMailTransport } from "./mail-transport";
 
@@ -14,7 +15,9 @@ export type OutgoingMail = {
 
 /**
  * Send one e-mail and record it in the mail log, whether it went or not. From a job, the mail
- * carries a Message-ID made from the job, so a copy sent again after a crash is the same message.
+ * carries a Message-ID made from the job, so a copy sent again after a crash is the same message,
+ * and the line saying it went is written even if the database is away for a while (retried), so
+ * a database restart never makes the job send it twice.
  */
 export async function sendMail(
   mail: OutgoingMail,
@@ -22,8 +25,9 @@ export async function sendMail(
 ): Promise<void> {
   const messageId =
     jobId === undefined ? undefined : `<job-${jobId}.${new URL(env.APP_URL).hostname}@plumbline>`;
+  let info: { messageId: string };
   try {
-    const info = await getMailTransport().sendMail({
+    info = await getMailTransport().sendMail({
       from: env.MAIL_FROM,
       to: mail.to,
       subject: mail.subject,
@@ -31,16 +35,20 @@ export async function sendMail(
       html: mail.html,
       ...(messageId ? { messageId } : {}),
     });
-    await logMail({
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    await logMail({ ...mail, toAddress: mail.to, status: "failed", error: message }).catch(
+      () => undefined,
+    );
+    throw error;
+  }
+  await whileDatabaseAway(() =>
+    logMail({
       ...mail,
       toAddress: mail.to,
       messageId: info.messageId,
       status: "sent",
       jobId: jobId ?? null,
-    });
-  } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
-    await logMail({ ...mail, toAddress: mail.to, status: "failed", error: message });
-    throw error;
-  }
+    }),
+  );
 }

@@ -13,6 +13,8 @@ export type StoredMessage = {
   from: string;
   to: string[];
   subject: string;
+  /** The Message-ID header as sent (a job's mail sent twice would show the same one twice). */
+  messageId: string | null;
   text: string;
   html: string | null;
 };
@@ -45,6 +47,7 @@ export async function startSmtpFake(opts: {
             from: session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
             to: session.envelope.rcptTo.map((r) => r.address.toLowerCase()),
             subject: mail.subject ?? "",
+            messageId: mail.messageId ?? null,
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : null,
           };

@@ -13,6 +13,7 @@ import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
 import { techFixtures } from "../support/tech-fixtures";
+import { waitForQueueIdle } from "../support/wait-for-queue-idle";
 
 // Issue 8, item 15: the void rule is written once. A void of a void undoes the first void (our
 // own product rule, no outside source), and the car card, fed the server's own event pack, shows
@@ -65,6 +66,7 @@ describe("a void the chief scrutineer undid", () => {
       reason: "it was this car after all",
     });
     expect((await postSync(chief, fx.eventId, "phone-void-rule", [undo])).status).toBe(200);
+    await waitForQueueIdle(databaseUrl); // the worker has re-derived the verdict
 
     // The server: of the three records only the first void is cancelled.
     const [row] = await queryTestDb<{ result: unknown }>(

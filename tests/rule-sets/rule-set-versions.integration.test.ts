@@ -5,6 +5,7 @@ import type { Verdict } from "@/lib/scrutineer/verdict-schema";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { queryTestDb } from "../support/query-test-db";
+import { waitForQueueIdle } from "../support/wait-for-queue-idle";
 
 const appUrl = inject("appUrl");
 const databaseUrl = inject("databaseUrl");
@@ -216,6 +217,7 @@ describe("a new rule-set version: check, save, preview, pin", () => {
       [saved.id],
     );
     expect(audit.map((a) => a.action)).toEqual(["rule-set.save", "rule-set.pin"]);
+    await waitForQueueIdle(databaseUrl); // the worker sends the e-mails the pin queued
     const mails = await queryTestDb<{ n: number }>(
       databaseUrl,
       "select count(*) as n from mail_log where kind = 'verdict' and to_address = ? and created_at >= ?",

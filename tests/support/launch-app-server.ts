@@ -68,7 +68,8 @@ export function launchAppServer(opts: {
     output: () => output,
     stop: (signal = "SIGTERM") =>
       new Promise<void>((resolve) => {
-        if (child.exitCode !== null) return resolve();
+        // Ended already (by itself, or killed by a signal: then exitCode stays null).
+        if (child.exitCode !== null || child.signalCode !== null) return resolve();
         child.once("exit", () => resolve());
         child.kill(signal);
         setTimeout(() => child.kill("SIGKILL"), 5000).unref();

@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { queryTestDb } from "./query-test-db";
+import { waitForQueueIdle } from "./wait-for-queue-idle";
 
 /**
  * Entries of the test event that only one test file uses: copies of an existing entry (same
@@ -48,6 +49,9 @@ let nextNumber = Math.floor(Math.random() * 50) * 20;
 /** Take scratch entries out again, with every row that names them. */
 export async function removeScratchEntries(databaseUrl: string, ids: string[]): Promise<void> {
   if (ids.length === 0) return;
+  // The worker may still be re-deriving their verdicts: let it finish, or it writes a verdict
+  // row for an entry this is deleting.
+  await waitForQueueIdle(databaseUrl);
   const tables = await queryTestDb<{ name: string }>(
     databaseUrl,
     `select table_name as name from information_schema.columns

@@ -4,6 +4,7 @@ import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";
 import { queryTestDb } from "../support/query-test-db";
 import { readingRecord, techFixtures } from "../support/tech-fixtures";
+import { waitForQueueIdle } from "../support/wait-for-queue-idle";
 
 const appUrl = inject("appUrl");
 const databaseUrl = inject("databaseUrl");
@@ -101,6 +102,7 @@ describe("results posted by e-mail", () => {
     const since = Date.now() - 1000;
     const response = await postSync(scrutineer, fx.eventId, "phone-m", [record]);
     expect(response.status).toBe(200);
+    await waitForQueueIdle(databaseUrl); // the worker re-derives the verdict and sends the mail
     for (const to of [demo.entrant, demo.codriver]) {
       const { messages } = (await (await fetch(`${mailboxUrl}/messages?to=${to}`)).json()) as {
         messages: { subject: string; text: string; receivedAt: string }[];
