@@ -1,4 +1,4 @@
-import { get, set, update } from "idb-keyval";
+import { update } from "idb-keyval";
 import { announceChange } from "./announce-change";
 import type { EventPack, PackRecord, PackVerdict } from "./event-pack-schema";
 import { idbStores } from "./idb-stores";
@@ -31,18 +31,6 @@ export async function saveEventPack(pack: EventPack, fetchedAt: Date): Promise<S
   );
   announceChange({ type: "pack", eventId: pack.event.id });
   return stored;
-}
-
-/** Put the server's fresh verdicts (from a sync answer) into the stored pack. */
-export async function saveServerVerdicts(eventId: string, verdicts: PackVerdict[]): Promise<void> {
-  if (verdicts.length === 0) return;
-  const { packs } = idbStores();
-  const pack = await get<StoredPack>(eventId, packs);
-  if (!pack) return;
-  const byEntry = new Map(pack.verdicts.map((v) => [v.entryId, v]));
-  for (const v of verdicts) byEntry.set(v.entryId, v);
-  await set(eventId, { ...pack, verdicts: [...byEntry.values()] }, packs);
-  announceChange({ type: "pack", eventId });
 }
 
 function mergeRecords(stored: PackRecord[], incoming: PackRecord[]): PackRecord[] {
