@@ -4,6 +4,7 @@ import "@/lib/zod-without-eval";
 import { defaultCache } from "@serwist/next/worker";
 import type { PrecacheEntry, SerwistGlobalConfig } from "serwist";
 import { ExpirationPlugin, NetworkFirst, NetworkOnly, Serwist } from "serwist";
+import { awaitFreshVerdicts } from "@/lib/offline/await-fresh-verdicts";
 import { drainOutbox } from "@/lib/offline/drain-outbox";
 import { OUTBOX_SYNC_TAG, TECH_PAGES_CACHE } from "@/lib/offline/outbox-constants";
 
@@ -52,10 +53,16 @@ const serwist = new Serwist({
 });
 
 // Background Sync: the browser wakes us when the phone is back online, even with the tab closed.
+// Then, kept alive a little longer, it looks for the server's new verdicts (15 s at most), so an
+// open tech-line page gets them even though this worker, not the page, sent the records.
 self.addEventListener("sync", (event) => {
   const sync = event as SyncEvent;
   if (sync.tag === OUTBOX_SYNC_TAG)
-    sync.waitUntil(drainOutbox({ now: () => Date.now() }).then(() => undefined));
+    sync.waitUntil(
+      drainOutbox({ now: () => Date.now() })
+        .then((summary) => Promise.all(summary.verdictsPending.map((p) => awaitFreshVerdicts(p))))
+        .then(() => undefined),
+    );
 });
 
 serwist.addEventListeners();

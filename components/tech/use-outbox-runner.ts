@@ -1,5 +1,6 @@
 "use client";
 import { useCallback, useEffect, useRef, useState } from "react";
+import { awaitFreshVerdicts } from "@/lib/offline/await-fresh-verdicts";
 import { type DrainSummary, drainOutbox } from "@/lib/offline/drain-outbox";
 import { requeueSignedOutRecords } from "@/lib/offline/requeue-signed-out-records";
 import { resetOutboxBackoff } from "@/lib/offline/reset-outbox-backoff";
@@ -9,6 +10,8 @@ const TICK_MS = 15_000;
 /**
  * Keeps the outbox moving while the tech line is open: on opening, on regaining signal, and on a
  * timer (each record's own backoff decides whether it goes). Background Sync covers a closed tab.
+ * After a sync it looks for the server's new verdicts (`awaitFreshVerdicts`, not awaited: the
+ * refreshed pack reaches the page through its own announcement).
  */
 export function useOutboxRunner(eventId: string, pending: number) {
   const [online, setOnline] = useState(true);
@@ -28,7 +31,9 @@ export function useOutboxRunner(eventId: string, pending: number) {
     try {
       for (let round = 0; round < 2; round += 1) {
         again.current = false;
-        setLast(await drainOutbox({ now: () => Date.now() }));
+        const summary = await drainOutbox({ now: () => Date.now() });
+        for (const pending of summary.verdictsPending) void awaitFreshVerdicts(pending);
+        setLast(summary);
         if (!again.current) break;
       }
     } finally {

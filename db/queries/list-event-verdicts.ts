@@ -1,13 +1,20 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { and, eq, gt } from "drizzle-orm";
 import { parseStoredVerdict } from "../../lib/entries/parse-stored-verdict";
 import { toPackVerdict } from "../../lib/tech/to-pack-verdict";
 import { getDb } from "../client";
 import { verdicts } from "../schema";
 
-/** The stored verdicts of an event, in the short form phones and boards use. A row whose JSON
- *  does not read as a verdict is left out (no verdict: the car shows as Waiting) and logged. */
-export async function listEventVerdicts({ eventId }: { eventId: string }) {
+/** The stored verdicts of an event (only those computed after `since`, if given), in the short
+ *  form phones and boards use. A row whose JSON does not read as a verdict is left out (no
+ *  verdict: the car shows as Waiting) and logged. */
+export async function listEventVerdicts({
+  eventId,
+  since,
+}: {
+  eventId: string;
+  since?: Date | null;
+}) {
   const rows = await getDb()
     .select({
       entryId: verdicts.entryId,
@@ -18,7 +25,11 @@ export async function listEventVerdicts({ eventId }: { eventId: string }) {
       computedAt: verdicts.computedAt,
     })
     .from(verdicts)
-    .where(eq(verdicts.eventId, eventId));
+    .where(
+      since
+        ? and(eq(verdicts.eventId, eventId), gt(verdicts.computedAt, since))
+        : eq(verdicts.eventId, eventId),
+    );
   return rows.flatMap((r) => {
     const verdict = parseStoredVerdict({ entryId: r.entryId, result: r.result });
     if (!verdict) return [];

@@ -1,11 +1,10 @@
 import { announceChange } from "./announce-change";
+import type { PendingVerdicts } from "./await-fresh-verdicts";
 import { backoffDelayMs } from "./backoff-delay";
-import type { PackVerdict } from "./event-pack-schema";
 import { listLocalRecords } from "./list-local-records";
 import { isPending, type LocalRecord } from "./local-record";
 import { OUTBOX_LOCK, SYNC_BATCH_SIZE } from "./outbox-constants";
 import { resetOutboxBackoff } from "./reset-outbox-backoff";
-import { saveServerVerdicts } from "./save-event-pack";
 import { updateLocalRecord } from "./update-local-record";
 import { uploadPhoto } from "./upload-photo";
 
@@ -15,6 +14,9 @@ export type DrainSummary = {
   refused: number;
   waiting: number;
   signedOut: boolean;
+  /** Per answered batch, the entries whose verdict the server's worker will recompute: the
+   *  caller waits for them with `awaitFreshVerdicts` (the drain itself never waits). */
+  verdictsPending: PendingVerdicts[];
 };
 
 type SyncAnswer = {
@@ -22,7 +24,10 @@ type SyncAnswer = {
     | { id: string; status: "stored" | "duplicate" }
     | { id: string | null; status: "refused"; reason: string }
   )[];
-  verdicts: PackVerdict[];
+  /** Server time the batch was received (ISO 8601). */
+  receivedAt?: string;
+  /** Entries whose verdict the server will recompute; missing from an older server = none. */
+  verdictsPending?: string[];
 };
 
 type Options = {
@@ -48,14 +53,30 @@ export async function drainOutbox(options: Options): Promise<DrainSummary> {
   const result = await locks.request(OUTBOX_LOCK, { ifAvailable: true }, (lock) =>
     lock ? run(options) : Promise.resolve<DrainSummary | null>(null),
   );
-  return result ?? { ran: false, sent: 0, refused: 0, waiting: 0, signedOut: false };
+  return (
+    result ?? {
+      ran: false,
+      sent: 0,
+      refused: 0,
+      waiting: 0,
+      signedOut: false,
+      verdictsPending: [],
+    }
+  );
 }
 
 /** Passes over the outbox in one drain: a pass after a success sends what was waiting out a retry. */
 const MAX_PASSES = 3;
 
 async function run(options: Options): Promise<DrainSummary> {
-  const summary: DrainSummary = { ran: true, sent: 0, refused: 0, waiting: 0, signedOut: false };
+  const summary: DrainSummary = {
+    ran: true,
+    sent: 0,
+    refused: 0,
+    waiting: 0,
+    signedOut: false,
+    verdictsPending: [],
+  };
   for (let pass = 0; pass < MAX_PASSES; pass += 1) {
     const { madeDue } = await runPass(options, summary);
     if (madeDue === 0) break;
@@ -81,7 +102,11 @@ async function runPass(
   };
   const total = due.length;
   const byEvent = new Map<string, LocalRecord[]>();
-  for (const item of due) byEvent.set(item.eventId, [...(byEvent.get(item.eventId) ?? []), item]);
+  for (const item of due) {
+    const items = byEvent.get(item.eventId);
+    if (items) items.push(item);
+    else byEvent.set(item.eventId, [item]);
+  }
 
   const later = async (items: LocalRecord[], error: string) => {
     for (const item of items) {
@@ -190,7 +215,9 @@ async function runPass(
           summary.sent += 1;
         }
       }
-      await saveServerVerdicts(eventId, body.verdicts ?? []);
+      const { receivedAt, verdictsPending: entryIds = [] } = body;
+      if (entryIds.length > 0 && receivedAt && !Number.isNaN(Date.parse(receivedAt)))
+        summary.verdictsPending.push({ eventId, entryIds, receivedAt });
       onProgress?.({ sent: summary.sent, total });
     }
     announceChange({ type: "records", eventId });

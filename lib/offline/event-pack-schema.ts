@@ -38,12 +38,16 @@ export const packVerdictSchema = z.object({
  * offline") and refreshed when there is signal. Stored in IndexedDB by lib/offline.
  */
 export const eventPackSchema = z.object({
-  packFormat: z.literal(1),
+  /** 2: in a partial pack, verdicts are partial too (the phone asks with `format=2`); 1: a
+   *  partial pack carries every verdict. The phone merges verdicts by entry either way. */
+  packFormat: z.union([z.literal(1), z.literal(2)]),
   etag: z.string(),
   generatedAt: z.string(),
-  /** Pass to `?since=` to get only records received after this pack. */
+  /** Pass to `?since=` to get only the records received (and, format 2, the verdicts computed)
+   *  after this pack; it is the pack's own time stepped back, so nothing committed late is missed. */
   recordsCursor: z.string().nullable(),
-  /** true when `records` holds only what arrived since the cursor the phone sent. */
+  /** true when `records` (and, format 2, `verdicts`) hold only what changed since the cursor the
+   *  phone sent; every other part is always whole. */
   partial: z.boolean(),
   event: z.object({
     id: z.string(),

@@ -7,19 +7,23 @@ export type FetchPackResult =
   | { kind: "signed-out" | "offline" | "error"; pack: StoredPack | undefined; message: string };
 
 /**
- * Fetch the event pack and store it. With a stored pack, ask only for what changed (ETag and the
- * records cursor); without signal, keep what the phone has.
+ * Fetch the event pack and store it. With a stored pack, ask only for what changed (ETag, and the
+ * cursor for the records and verdicts that arrived since); without signal, keep what the phone has.
  */
 export async function fetchEventPack(
   eventId: string,
-  now: () => Date = () => new Date(),
+  {
+    now = () => new Date(),
+    fetchImpl = fetch,
+  }: { now?: () => Date; fetchImpl?: typeof fetch } = {},
 ): Promise<FetchPackResult> {
   const stored = await loadEventPack(eventId);
-  const url = new URL(`/api/events/${eventId}/pack`, self.location.origin);
-  if (stored?.recordsCursor) url.searchParams.set("since", stored.recordsCursor);
+  // Format 2: this phone merges verdicts by entry, so a partial pack may carry only new ones.
+  const query = new URLSearchParams({ format: "2" });
+  if (stored?.recordsCursor) query.set("since", stored.recordsCursor);
   let response: Response;
   try {
-    response = await fetch(url, {
+    response = await fetchImpl(`/api/events/${eventId}/pack?${query}`, {
       headers: stored ? { "if-none-match": stored.etag } : {},
       credentials: "same-origin",
       cache: "no-store",

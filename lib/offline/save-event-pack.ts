@@ -1,43 +1,49 @@
-import { get, set } from "idb-keyval";
+import { update } from "idb-keyval";
 import { announceChange } from "./announce-change";
-import type { EventPack, PackVerdict } from "./event-pack-schema";
+import type { EventPack, PackRecord, PackVerdict } from "./event-pack-schema";
 import { idbStores } from "./idb-stores";
 
 export type StoredPack = EventPack & { fetchedAt: string };
 
 /**
- * Store a pack. A partial pack (records since the phone's cursor) is merged into the stored one:
- * records are a set keyed by id, so merging is a union and replaying is harmless.
+ * Store a pack. A partial pack (what changed since the phone's cursor) is merged into the stored
+ * one: records are a set keyed by id, verdicts one per entry where the later `computedAt` wins
+ * (so an older answer arriving last never undoes a newer verdict); replaying is harmless. A whole
+ * pack replaces what was stored.
  */
 export async function saveEventPack(pack: EventPack, fetchedAt: Date): Promise<StoredPack> {
-  const { packs } = idbStores();
-  const previous = pack.partial ? await get<StoredPack>(pack.event.id, packs) : undefined;
-  const records = previous ? mergeById(previous.records, pack.records) : pack.records;
-  const stored: StoredPack = {
+  const merge = (previous: StoredPack | undefined): StoredPack => ({
     ...pack,
-    records,
+    records: previous ? mergeRecords(previous.records, pack.records) : pack.records,
+    verdicts: previous ? mergeVerdicts(previous.verdicts, pack.verdicts) : pack.verdicts,
     partial: false,
     fetchedAt: fetchedAt.toISOString(),
-  };
-  await set(pack.event.id, stored, packs);
+  });
+  let stored = merge(undefined);
+  // Read and write in one IndexedDB transaction: two refreshes saving at once never lose a merge.
+  await update<StoredPack>(
+    pack.event.id,
+    (previous) => {
+      stored = merge(pack.partial ? previous : undefined);
+      return stored;
+    },
+    idbStores().packs,
+  );
   announceChange({ type: "pack", eventId: pack.event.id });
   return stored;
 }
 
-/** Put the server's fresh verdicts (from a sync answer) into the stored pack. */
-export async function saveServerVerdicts(eventId: string, verdicts: PackVerdict[]): Promise<void> {
-  if (verdicts.length === 0) return;
-  const { packs } = idbStores();
-  const pack = await get<StoredPack>(eventId, packs);
-  if (!pack) return;
-  const byEntry = new Map(pack.verdicts.map((v) => [v.entryId, v]));
-  for (const v of verdicts) byEntry.set(v.entryId, v);
-  await set(eventId, { ...pack, verdicts: [...byEntry.values()] }, packs);
-  announceChange({ type: "pack", eventId });
+function mergeRecords(stored: PackRecord[], incoming: PackRecord[]): PackRecord[] {
+  const byId = new Map(stored.map((r) => [r.id, r]));
+  for (const r of incoming) byId.set(r.id, r);
+  return [...byId.values()];
 }
 
-function mergeById<T extends { id: string }>(a: T[], b: T[]): T[] {
-  const byId = new Map(a.map((r) => [r.id, r]));
-  for (const r of b) byId.set(r.id, r);
-  return [...byId.values()];
+function mergeVerdicts(stored: PackVerdict[], incoming: PackVerdict[]): PackVerdict[] {
+  const byEntry = new Map(stored.map((v) => [v.entryId, v]));
+  for (const v of incoming) {
+    const held = byEntry.get(v.entryId);
+    if (!held || Date.parse(v.computedAt) >= Date.parse(held.computedAt)) byEntry.set(v.entryId, v);
+  }
+  return [...byEntry.values()];
 }

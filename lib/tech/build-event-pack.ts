@@ -1,8 +1,10 @@
 import "server-only";
 import { createHash } from "node:crypto";
 import { ensureEventPassKey } from "../../db/queries/ensure-event-pass-key";
+import { getEventRecordsStamp } from "../../db/queries/get-event-records-stamp";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { getEventSummary } from "../../db/queries/get-event-summary";
+import { getEventVerdictsStamp } from "../../db/queries/get-event-verdicts-stamp";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
 import { listEventPassKeys } from "../../db/queries/list-event-pass-keys";
 import { listEventRecordsSince } from "../../db/queries/list-event-records-since";
@@ -12,82 +14,105 @@ import { listRevokedPassIds } from "../../db/queries/list-revoked-pass-ids";
 import { AppError } from "../errors";
 import type { EventPack } from "../offline/event-pack-schema";
 
-// A record committed a moment after a pack was read can carry a receive time just before the
-// cursor; stepping the cursor back a little re-sends a few records (harmless: merging is a union)
-// instead of ever missing one.
+// A record or verdict committed a moment after a pack was read can carry a receive (or compute)
+// time just before that pack's time; stepping the cursor back a little re-sends a few of them
+// (harmless: the phone merges records by id and verdicts by entry) instead of ever missing one.
+// So whatever stamps `received_at` or `computed_at` must commit within this time of stamping.
 const CURSOR_SAFETY_MS = 10_000;
 
 /**
- * Everything the tech line needs offline for one event. With `since`, only records received
- * after it (a partial pack the phone merges). The ETag covers the whole pack's content.
+ * Everything the tech line needs offline for one event. With `since` (a cursor from an earlier
+ * pack), only the records received after it and — when the phone merges verdicts by entry
+ * (`partialVerdicts`, pack format 2) — only the verdicts computed after it; the rest (event,
+ * rule set, entries, officials, pass keys, revoked passes) is small and always whole.
+ *
+ * The ETag comes first, from the small parts and cheap aggregates of records and verdicts, so a
+ * phone whose pack is current gets `pack: null` (→ 304) without a record or verdict being read.
+ * The aggregates are read before the records and verdicts, so a pack never holds less than its
+ * ETag says: a change landing in between is sent again next time, never skipped.
  */
 export async function buildEventPack({
   eventId,
   since,
+  partialVerdicts,
   now,
+  ifNoneMatch,
 }: {
   eventId: string;
   since: Date | null;
+  partialVerdicts: boolean;
   now: Date;
-}): Promise<EventPack> {
+  ifNoneMatch: string | null;
+}): Promise<{ etag: string; pack: EventPack | null }> {
   const [summary, context] = await Promise.all([
     getEventSummary({ eventId }),
     getEventRuleSet({ eventId }),
   ]);
   if (!summary || !context) throw new AppError("not_found", "No such event.");
   await ensureEventPassKey({ eventId });
-  const [entries, officials, passKeys, revokedPassIds, verdicts, allRecords] = await Promise.all([
-    listPackEntries({ eventId }),
-    listEventOfficials({ eventId }),
-    listEventPassKeys({ eventId }),
-    listRevokedPassIds({ eventId }),
-    listEventVerdicts({ eventId }),
-    listEventRecordsSince({ eventId, since: null }),
-  ]);
-  const last = allRecords.at(-1)?.receivedAt ?? null;
-  // The cursor is this pack's own time, stepped back: everything received before then is in it.
-  const recordsCursor = new Date(now.getTime() - CURSOR_SAFETY_MS).toISOString();
-  const records = since
-    ? allRecords.filter((r) => Date.parse(r.receivedAt) > since.getTime())
-    : allRecords;
-  const etag = createHash("sha256")
+  const [entries, officialRows, passKeys, revokedPassIds, recordsStamp, verdictsStamp] =
+    await Promise.all([
+      listPackEntries({ eventId }),
+      listEventOfficials({ eventId }),
+      listEventPassKeys({ eventId }),
+      listRevokedPassIds({ eventId }),
+      getEventRecordsStamp({ eventId }),
+      getEventVerdictsStamp({ eventId }),
+    ]);
+  const event = {
+    id: summary.id,
+    name: summary.name,
+    eventDate: summary.eventDate,
+    timeZone: summary.timeZone,
+    unitSystem: summary.unitSystem,
+    venueName: summary.venueName,
+  };
+  // One name per person, however many roles they hold.
+  const officials = [
+    ...new Map(
+      officialRows.map((o) => [o.userId, { userId: o.userId, name: o.name ?? o.email }]),
+    ).values(),
+  ];
+  // Rule-set versions are never edited, so the version id stands for the rule set.
+  const digest = createHash("sha256")
     .update(
       JSON.stringify({
-        v: context.ruleSetVersionId,
+        event,
+        ruleSetVersionId: context.ruleSetVersionId,
         entries,
-        keys: passKeys,
+        officials,
+        passKeys,
         revokedPassIds,
-        verdicts: verdicts.map((v) => [v.entryId, v.status, v.classId, v.computedAt]),
-        records: [allRecords.length, last],
-        officials: officials.map((o) => o.userId),
+        records: recordsStamp,
+        verdicts: verdictsStamp,
       }),
     )
     .digest("base64url");
+  const etag = `"${digest}"`;
+  if (ifNoneMatch === etag) return { etag, pack: null };
+
+  const [verdicts, records] = await Promise.all([
+    listEventVerdicts({ eventId, since: partialVerdicts ? since : null }),
+    listEventRecordsSince({ eventId, since }),
+  ]);
   return {
-    packFormat: 1,
-    etag: `"${etag}"`,
-    generatedAt: now.toISOString(),
-    recordsCursor,
-    partial: since !== null,
-    event: {
-      id: summary.id,
-      name: summary.name,
-      eventDate: summary.eventDate,
-      timeZone: summary.timeZone,
-      unitSystem: summary.unitSystem,
-      venueName: summary.venueName,
+    etag,
+    pack: {
+      packFormat: partialVerdicts ? 2 : 1,
+      etag,
+      generatedAt: now.toISOString(),
+      // This pack's own time, stepped back: everything received or computed before it is here.
+      recordsCursor: new Date(now.getTime() - CURSOR_SAFETY_MS).toISOString(),
+      partial: since !== null,
+      event,
+      ruleSet: context.ruleSet,
+      ruleSetVersionId: context.ruleSetVersionId,
+      entries,
+      officials,
+      passKeys,
+      revokedPassIds,
+      verdicts,
+      records,
     },
-    ruleSet: context.ruleSet,
-    ruleSetVersionId: context.ruleSetVersionId,
-    entries,
-    officials: [
-      ...new Map(
-        officials.map((o) => [o.userId, { userId: o.userId, name: o.name ?? o.email }]),
-      ).values(),
-    ],
-    passKeys,
-    revokedPassIds,
-    verdicts,
-    records,
   };
 }

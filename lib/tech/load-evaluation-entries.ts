@@ -34,7 +34,10 @@ export async function loadEvaluationEntries({
       );
       continue;
     }
-    byEntry.set(row.entryId, [...(byEntry.get(row.entryId) ?? []), parsed.data]);
+    // Push onto the entry's own list: copying it per row made loading an entry's n records O(n²).
+    const list = byEntry.get(row.entryId);
+    if (list) list.push(parsed.data);
+    else byEntry.set(row.entryId, [parsed.data]);
   }
   const display = displayUnits({ length: context.unitSystem });
   return entries.map((entry) => ({

@@ -46,7 +46,6 @@ describe("the outbox", () => {
           { id: b, status: "duplicate" },
           { id: c, status: "refused", reason: "value: wingSpanMm cannot be negative" },
         ],
-        verdicts: [],
       })) as typeof fetch;
     const summary = await drainOutbox({ now: () => 1, fetchImpl });
     expect(summary).toMatchObject({ sent: 2, refused: 1, waiting: 0 });
@@ -55,6 +54,36 @@ describe("the outbox", () => {
     expect(states.get(b ?? "")?.state).toBe("duplicate");
     expect(states.get(c ?? "")?.state).toBe("refused");
     expect(states.get(c ?? "")?.lastError).toMatch(/negative/);
+  });
+
+  it("hands on the entries whose verdicts the server will recompute, per batch with its receive time", async () => {
+    const eventId = "event-g";
+    const items = [reading(eventId, 60), reading(eventId, 61)];
+    for (const item of items) await addLocalRecord(item);
+    const receivedAt = "2027-06-05T09:00:00.000Z";
+    const summary = await drainOutbox({
+      now: () => 1,
+      fetchImpl: (async () =>
+        answer(200, {
+          results: items.map((i) => ({ id: i.record.id, status: "stored" })),
+          receivedAt,
+          verdictsPending: ["entry-1"],
+        })) as typeof fetch,
+    });
+    expect(summary.verdictsPending).toEqual([{ eventId, entryIds: ["entry-1"], receivedAt }]);
+    // An answer without the field (an older server) asks for no wait.
+    const more = reading(eventId, 62);
+    await addLocalRecord(more);
+    const quiet = await drainOutbox({
+      now: () => 2,
+      fetchImpl: (async () =>
+        answer(200, {
+          results: [{ id: more.record.id, status: "stored" }],
+          receivedAt,
+        })) as typeof fetch,
+    });
+    expect(quiet.sent).toBe(1);
+    expect(quiet.verdictsPending).toEqual([]);
   });
 
   it("keeps everything queued, with a later attempt time, when there is no signal", async () => {
@@ -75,7 +104,7 @@ describe("the outbox", () => {
       now: () => 1000,
       fetchImpl: (async () => {
         calls += 1;
-        return answer(200, { results: [], verdicts: [] });
+        return answer(200, { results: [] });
       }) as typeof fetch,
     });
     expect(calls).toBe(0);
@@ -96,7 +125,6 @@ describe("the outbox", () => {
       fetchImpl: (async () =>
         answer(200, {
           results: [{ id: item.record.id, status: "stored" }],
-          verdicts: [],
         })) as typeof fetch,
     });
     expect((await listLocalRecords(eventId))[0]?.state).toBe("sent");
@@ -112,7 +140,6 @@ describe("the retry wait", () => {
     (async () =>
       answer(200, {
         results: ids.map((id) => ({ id, status: "stored" })),
-        verdicts: [],
       })) as unknown as typeof fetch;
   const noSignal = (async () => {
     throw new TypeError("Failed to fetch");
@@ -168,7 +195,6 @@ describe("the retry wait", () => {
         bodies.push(ids);
         return answer(200, {
           results: ids.map((id) => ({ id, status: "stored" })),
-          verdicts: [],
         });
       }) as typeof fetch,
     });
