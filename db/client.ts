@@ -5,13 +5,20 @@ import * as schema from "./schema";
 
 /** Open a mysql2 pool on a URL. Times are stored and read as UTC. */
 export function createPool(url: string, connectionLimit = 10): mysql.Pool {
-  return mysql.createPool({
+  const pool = mysql.createPool({
     uri: url,
     connectionLimit,
     timezone: "Z",
     dateStrings: false,
     supportBigNumbers: true,
   });
+  // A lock wait gives up after 5 s, not InnoDB's 50 (then runTransaction tries again): a
+  // transaction stamps its receive or compute time when it starts, and phones' partial packs
+  // look back 10 s for rows committed late.
+  pool.on("connection", (connection) => {
+    connection.query("SET SESSION innodb_lock_wait_timeout = 5");
+  });
+  return pool;
 }
 
 export function createDb(pool: mysql.Pool) {

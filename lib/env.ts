@@ -48,6 +48,10 @@ const envSchema = z
       (v) => (v === "" ? undefined : v),
       z.iso.datetime({ offset: true }).optional(),
     ),
+    /** With PLUMBLINE_FAKE_NOW: the real time (epoch ms) at which the fake instant applies, so
+     *  the app and the worker, started a little apart, read one clock. Unset: each process's first
+     *  reading of the clock. */
+    PLUMBLINE_FAKE_NOW_SINCE: z.coerce.number().int().positive().optional(),
     /** How long a worker holds a job before another may take it (it renews while working). */
     PLUMBLINE_JOB_LEASE_MS: z.coerce.number().int().min(1000).max(600_000).default(15_000),
     /** How often an idle worker looks for due jobs. */

@@ -19,6 +19,8 @@ export PORT="${PORT:-3000}" NEXT_TELEMETRY_DISABLED=1
 # AUTH_SECRET, the demo accounts and the /demo pages. A live deployment runs `next start` itself.
 export PLUMBLINE_MODE=demo
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
+# A fake clock (demo only) is read alike by the app and the worker: both start it from now.
+if [ -n "${PLUMBLINE_FAKE_NOW:-}" ]; then export PLUMBLINE_FAKE_NOW_SINCE="${PLUMBLINE_FAKE_NOW_SINCE:-$(date +%s%3N)}"; fi
 
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx scripts/seed.ts

@@ -5,6 +5,7 @@ import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { listEntryContacts } from "../../db/queries/list-entry-contacts";
 import { saveVerdicts } from "../../db/queries/save-verdicts";
 import { runTransaction } from "../../db/run-transaction";
+import { clock } from "../clock";
 import { env } from "../env";
 import { AppError } from "../errors";
 import { evaluateEntry } from "../scrutineer/evaluate-entry";
@@ -66,11 +67,14 @@ export async function recomputeVerdicts({
     recordCount: verdict.records.total,
   }));
   return runTransaction(async (tx) => {
+    // Stamped when saved (each attempt anew), not when the work began: a phone's partial pack
+    // finds verdicts by this time, a little behind the pack's own.
+    const computedAt = laterOf(now, clock.now());
     const before = await saveVerdicts({
       tx,
       eventId,
       ruleSetVersionId: context.ruleSetVersionId,
-      computedAt: now,
+      computedAt,
       rows,
     });
     const changes = results.map(({ entryId, verdict }) => ({
@@ -88,10 +92,12 @@ export async function recomputeVerdicts({
       changes,
       contacts,
       ruleSet: context.ruleSet,
-      computedAt: now,
+      computedAt,
       appUrl: env.APP_URL,
     });
     await enqueueJobs(mails, tx);
     return { changes, mailsQueued: mails.length };
   });
 }
+
+const laterOf = (a: Date, b: Date) => (a.getTime() >= b.getTime() ? a : b);

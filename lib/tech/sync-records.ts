@@ -8,6 +8,7 @@ import { listRecordAuthors } from "../../db/queries/list-record-authors";
 import { runTransaction } from "../../db/run-transaction";
 import type { SessionUser } from "../auth/get-session-user";
 import type { Role } from "../auth/roles";
+import { clock } from "../clock";
 import { AppError } from "../errors";
 import { faultPoint } from "../jobs/fault-point";
 import { RECOMPUTE_VERDICTS } from "../jobs/job-kinds";
@@ -128,8 +129,12 @@ export async function syncRecords({
   });
 
   const batch = accepted.map((a) => a.record);
+  // The receive time is stamped on each attempt of the transaction (a retried one is later):
+  // a phone's partial pack finds records by it, a little behind the pack's own time.
+  let receivedAt = now;
   const outcomes = await runTransaction(async (tx) => {
-    const stored = await insertRecords({ tx, eventId, batch, receivedAt: now });
+    receivedAt = laterOf(now, clock.now());
+    const stored = await insertRecords({ tx, eventId, batch, receivedAt });
     const touched = [
       ...new Set(batch.filter((r) => stored.get(r.id) === "stored").map((r) => r.entryId)),
     ];
@@ -156,5 +161,7 @@ export async function syncRecords({
       if (outcome === "stored") pending.add(record.entryId);
     }
   }
-  return { results, receivedAt: now.toISOString(), verdictsPending: [...pending] };
+  return { results, receivedAt: receivedAt.toISOString(), verdictsPending: [...pending] };
 }
+
+const laterOf = (a: Date, b: Date) => (a.getTime() >= b.getTime() ? a : b);

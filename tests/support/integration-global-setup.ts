@@ -20,6 +20,8 @@ declare module "vitest" {
 }
 
 export default async function setup(project: TestProject) {
+  // One fake clock (if any) for the test process, the app and the worker alike.
+  if (process.env.PLUMBLINE_FAKE_NOW) process.env.PLUMBLINE_FAKE_NOW_SINCE ??= String(Date.now());
   const database = await createTestDatabase("int");
   const env = testServiceEnv(database.url);
   Object.assign(process.env, env);
