@@ -12,7 +12,7 @@ export type PackFetch = {
   gzipBytes: number;
   /** Whether the server sent it compressed (Next's `compress`, on by default). */
   compressedByServer: boolean;
-  body: { recordsCursor?: string; records?: unknown[] } | null;
+  body: { generatedAt?: string; recordsCursor?: string; records?: unknown[] } | null;
 };
 
 /** One request; bounded by a 60 s timeout. */
