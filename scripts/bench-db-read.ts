@@ -26,6 +26,8 @@ export type DbReadResult = {
   allAtOnceMs: number;
   /** One query per entry (as a sync batch touching one car reads it). */
   perEntryMs: number;
+  /** Every repetition's one-query time, in order (`npm run bench` pairs them with engine runs). */
+  allAtOnceRuns: number[];
 };
 
 /** Store the bench entries' records in MariaDB and time reading them back (median of `repetitions`). */
@@ -159,7 +161,12 @@ export async function measureDbRead(
       }
       perRuns.push(performance.now() - started);
     }
-    return { rows, allAtOnceMs: median(allRuns), perEntryMs: median(perRuns) };
+    return {
+      rows,
+      allAtOnceMs: median(allRuns),
+      perEntryMs: median(perRuns),
+      allAtOnceRuns: allRuns,
+    };
   } finally {
     await pool.end();
     await database.drop();

@@ -7,7 +7,7 @@ export class HttpSession {
   async fetch(pathname: string, init: RequestInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
     if (this.cookies.size > 0) {
-      headers.set("cookie", [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; "));
+      headers.set("cookie", this.cookieHeader());
     }
     const response = await fetch(new URL(pathname, this.baseUrl), {
       ...init,
@@ -29,6 +29,11 @@ export class HttpSession {
 
   hasCookie(name: string): boolean {
     return this.cookies.has(name);
+  }
+
+  /** The Cookie header this session sends (for a client other than fetch, e.g. the bench's). */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
   }
 
   /** Sign in through Auth.js's own credentials endpoint (CSRF token first), as the form does. */

@@ -3,6 +3,8 @@ import path from "node:path";
 
 export type LaunchedServer = {
   url: string;
+  /** The `next start` process's id (the bench reads its CPU time from /proc). */
+  pid: number | undefined;
   /** Resolves "healthy" once /api/health answers 200, or "exited" if the process ends first. */
   outcome: Promise<"healthy" | "exited">;
   exitCode: () => number | null;
@@ -63,6 +65,7 @@ export function launchAppServer(opts: {
   })();
   return {
     url,
+    pid: child.pid,
     outcome: Promise.race([healthy, exited]),
     exitCode: () => child.exitCode,
     output: () => output,
