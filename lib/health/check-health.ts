@@ -1,10 +1,15 @@
 import "server-only";
+import { countOpenJobs } from "../../db/queries/jobs/count-open-jobs";
 import { pingDatabase } from "../../db/queries/ping-database";
 import { getMailTransport } from "../mail/mail-transport";
 
 export type HealthReport = {
   ok: boolean;
-  checks: { database: { ok: boolean; detail: string }; mail: { ok: boolean; detail: string } };
+  checks: {
+    database: { ok: boolean; detail: string };
+    mail: { ok: boolean; detail: string };
+    jobs: { ok: boolean; detail: string };
+  };
 };
 
 async function timed<T>(work: Promise<T>, ms: number): Promise<T> {
@@ -19,11 +24,18 @@ async function timed<T>(work: Promise<T>, ms: number): Promise<T> {
   }
 }
 
-/** Can the app reach its database and its mail server right now? */
+/** A job waiting longer than this means no worker is keeping up (or none runs). */
+const JOB_WAIT_LIMIT_SECONDS = 300;
+
+/**
+ * Can the app reach its database and its mail server right now, and is the job worker keeping
+ * up (no job waiting over five minutes)?
+ */
 export async function checkHealth(): Promise<HealthReport> {
-  const [database, mail] = await Promise.allSettled([
+  const [database, mail, jobs] = await Promise.allSettled([
     timed(pingDatabase(), 3000),
     timed(getMailTransport().verify(), 3000),
+    timed(countOpenJobs(), 3000),
   ]);
   const checks = {
     database:
@@ -34,8 +46,15 @@ export async function checkHealth(): Promise<HealthReport> {
       mail.status === "fulfilled"
         ? { ok: true, detail: "SMTP server answered" }
         : { ok: false, detail: `mail server unreachable: ${reason(mail.reason)}` },
+    jobs:
+      jobs.status === "fulfilled"
+        ? {
+            ok: jobs.value.oldestSeconds <= JOB_WAIT_LIMIT_SECONDS,
+            detail: `${jobs.value.open} waiting (oldest ${jobs.value.oldestSeconds} s), ${jobs.value.failed} given up${jobs.value.oldestSeconds > JOB_WAIT_LIMIT_SECONDS ? ": is the worker running? (npm run worker)" : ""}`,
+          }
+        : { ok: false, detail: `job queue unreadable: ${reason(jobs.reason)}` },
   };
-  return { ok: checks.database.ok && checks.mail.ok, checks };
+  return { ok: checks.database.ok && checks.mail.ok && checks.jobs.ok, checks };
 }
 
 function reason(error: unknown): string {

@@ -82,8 +82,10 @@ export async function startBenchStack(
   if (existsSync(workerScript)) {
     worker = await spawnReadyProcess({
       name: "worker",
-      command: path.join(root, "node_modules/.bin/tsx"),
-      args: ["scripts/worker.ts"],
+      // node itself with tsx as a loader (not the tsx launcher, which runs a second process), so
+      // the pid is the worker's own and its CPU time can be read from /proc.
+      command: process.execPath,
+      args: ["--conditions=react-server", "--import", "tsx", "scripts/worker.ts"],
       cwd: root,
       env,
       ready: /\[worker\] ready/,

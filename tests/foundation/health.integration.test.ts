@@ -1,8 +1,10 @@
 import { afterEach, describe, expect, inject, it, vi } from "vitest";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
+import { queryTestDb } from "../support/query-test-db";
 
 const appUrl = inject("appUrl");
+const databaseUrl = inject("databaseUrl");
 
 type Report = { ok: boolean; checks?: Record<string, { ok: boolean; detail: string }> };
 
@@ -35,6 +37,26 @@ describe("GET /api/health", () => {
     expect(body.checks?.database?.ok).toBe(true);
     expect(body.checks?.database?.detail).toMatch(/\d+ migrations applied/);
     expect(body.checks?.mail?.ok).toBe(true);
+    expect(body.checks?.jobs?.ok).toBe(true);
+  });
+
+  it("says the worker is not keeping up when a job has waited over five minutes", async () => {
+    // A job of a kind no worker takes, queued ten minutes ago: what a queue with no worker looks like.
+    await queryTestDb(
+      databaseUrl,
+      `insert into jobs (kind, dedupe_key, payload, status, run_after, created_at)
+       values ('health-probe', 'health-probe', '{}', 'queued',
+               utc_timestamp(3) - interval 10 minute, utc_timestamp(3) - interval 10 minute)`,
+    );
+    try {
+      const { checkHealth } = await import("@/lib/health/check-health");
+      const report = await checkHealth();
+      expect(report.ok).toBe(false);
+      expect(report.checks.jobs.ok).toBe(false);
+      expect(report.checks.jobs.detail).toMatch(/is the worker running\?/);
+    } finally {
+      await queryTestDb(databaseUrl, "delete from jobs where dedupe_key = 'health-probe'");
+    }
   });
 
   it("says which part failed when SMTP is unreachable", async () => {
