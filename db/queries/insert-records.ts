@@ -12,9 +12,9 @@ export type InsertOutcome = "stored" | "duplicate" | "conflict";
  * lock another phone's batch can wait on: `INSERT … ON DUPLICATE KEY UPDATE id = id` (a new id
  * takes only an insert-intention lock, and those never conflict with each other; an id already
  * stored is left as it was, and unlike `INSERT IGNORE` no other error is turned into a warning).
- * Then one read of the batch's ids says what happened: a row carrying this request's receive
- * time is ours (stored); any other row was there before — the same content is a duplicate, other
- * content a conflict. Records are never updated.
+ * Then a narrow read of the batch's ids and receive times says what happened: a row carrying this
+ * request's receive time is ours (stored); only the rows that were there before are read whole and
+ * compared — the same content is a duplicate, other content a conflict. Records are never updated.
  */
 export async function insertRecords({
   tx,
@@ -48,20 +48,32 @@ export async function insertRecords({
       })),
     )
     .onDuplicateKeyUpdate({ set: { id: sql`${records.id}` } });
+  // Which rows carry this request's receive time (ours: stored) — a narrow read, no payloads.
+  const stamps = await tx
+    .select({ id: records.id, receivedAt: records.receivedAt })
+    .from(records)
+    .where(
+      inArray(
+        records.id,
+        unique.map((r) => r.id),
+      ),
+    );
+  const earlier = new Set(
+    stamps.filter((s) => s.receivedAt.getTime() !== receivedAt.getTime()).map((s) => s.id),
+  );
+  for (const record of unique) if (!earlier.has(record.id)) outcomes.set(record.id, "stored");
+  if (earlier.size === 0) return outcomes;
+  // The ids that were there before: compare what is stored with what was sent.
   const stored = new Map(
     (
       await tx
         .select()
         .from(records)
-        .where(
-          inArray(
-            records.id,
-            unique.map((r) => r.id),
-          ),
-        )
+        .where(inArray(records.id, [...earlier]))
     ).map((row) => [row.id, row]),
   );
   for (const record of unique) {
+    if (!earlier.has(record.id)) continue;
     const row = stored.get(record.id);
     const same =
       row !== undefined &&
@@ -70,8 +82,7 @@ export async function insertRecords({
       row.kind === record.kind &&
       row.officialId === record.officialId &&
       stableStringify(row.payload) === stableStringify(record.payload);
-    const ours = row !== undefined && row.receivedAt.getTime() === receivedAt.getTime();
-    outcomes.set(record.id, !same ? "conflict" : ours ? "stored" : "duplicate");
+    outcomes.set(record.id, same ? "duplicate" : "conflict");
   }
   return outcomes;
 }

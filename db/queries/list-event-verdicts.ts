@@ -22,6 +22,7 @@ export async function listEventVerdicts({
       classId: verdicts.finalClass,
       reason: verdicts.reason,
       result: verdicts.result,
+      resultHash: verdicts.resultHash,
       computedAt: verdicts.computedAt,
     })
     .from(verdicts)
@@ -31,7 +32,11 @@ export async function listEventVerdicts({
         : eq(verdicts.eventId, eventId),
     );
   return rows.flatMap((r) => {
-    const verdict = parseStoredVerdict({ entryId: r.entryId, result: r.result });
+    const verdict = parseStoredVerdict({
+      entryId: r.entryId,
+      result: r.result,
+      resultHash: r.resultHash,
+    });
     if (!verdict) return [];
     return [
       toPackVerdict({

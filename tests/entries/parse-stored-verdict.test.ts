@@ -22,6 +22,19 @@ describe("parseStoredVerdict: the verdicts table's JSON, read through the verdic
     expect(parseStoredVerdict({ entryId: "e-1", result: stored })).toEqual(verdict);
   });
 
+  it("reads the JSON of one stored hash once, and another hash anew", () => {
+    const stored: unknown = JSON.parse(JSON.stringify(verdict));
+    const first = parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-1" });
+    expect(first).toEqual(verdict);
+    // The same hash: the verdict already read (the same object), not a second parse.
+    expect(parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-1" })).toBe(first);
+    // Another hash, or none: parsed again (an equal but new object).
+    const second = parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-2" });
+    expect(second).toEqual(verdict);
+    expect(second).not.toBe(first);
+    expect(parseStoredVerdict({ entryId: "e-9", result: stored })).not.toBe(first);
+  });
+
   it("gives a verdict stored before `rejectedOverride` existed its default", () => {
     const { rejectedOverride: _, ...older } = verdict;
     expect(parseStoredVerdict({ entryId: "e-2", result: older })?.rejectedOverride).toBeNull();
