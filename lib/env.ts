@@ -55,7 +55,7 @@ const envSchema = z
     /** How long a worker holds a job before another may take it (it renews while working). */
     PLUMBLINE_JOB_LEASE_MS: z.coerce.number().int().min(1000).max(600_000).default(15_000),
     /** How often an idle worker looks for due jobs. */
-    PLUMBLINE_WORKER_POLL_MS: z.coerce.number().int().min(20).max(10_000).default(150),
+    PLUMBLINE_WORKER_POLL_MS: z.coerce.number().int().min(20).max(10_000).default(100),
     /** Demo and tests only: named places where the process kills itself, for the fault tests
      *  (lib/jobs/fault-point.ts), comma-separated, each optionally `name@n` (the n-th time). */
     PLUMBLINE_FAULTS: z.string().default(""),

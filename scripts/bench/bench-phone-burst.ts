@@ -1,6 +1,7 @@
 // P6 (40 phones at once against one phone alone, with its physical floor) and P2b (batch stored
 // → verdict visible to the entrant, under that burst), each repetition on fresh copies of the
 // demo cars.
+
 import type { Pool } from "mysql2/promise";
 import type { HttpSession } from "../../tests/support/http-session";
 import { BATCH_SIZE, type BenchSizes } from "./bench-options";
@@ -9,6 +10,7 @@ import { copyDemoEntries, removeCopies } from "./copy-demo-entries";
 import { type Figure, type FigureRun, makeFigure } from "./figure";
 import { type CpuPids, measureSinglePhone } from "./measure-single-phone";
 import type { Phone, PhoneAnswer } from "./post-phone-batch";
+import { processTreeCpuSeconds } from "./process-cpu-seconds";
 import { percentile } from "./summarize";
 import { waitForStoredVerdicts } from "./wait-for-stored-verdicts";
 import { VERDICT_GIVE_UP_MS, VERDICT_POLL_MS, waitForVerdict } from "./wait-for-verdict";
@@ -66,8 +68,13 @@ export async function benchPhoneBurst(opts: {
       const floorAllMs = ((n * cpuAll) / opts.cores) * 1000;
       const floorAppMs = ((n * (cpu.app + cpu.worker)) / opts.cores) * 1000;
 
-      // The burst, measured on its own (no verdict polling beside it).
+      // The burst, measured on its own (no verdict polling beside it). The app is one Node
+      // thread: the CPU it spends on the burst is time the last answers must wait for, however
+      // the work is ordered — the tightest floor, measured on the burst itself.
+      const appCpuBefore = processTreeCpuSeconds(opts.pids.app);
       const burst = await burstPhones(opts.eventId, phones);
+      const appCpuBurstMs = (processTreeCpuSeconds(opts.pids.app) - appCpuBefore) * 1000;
+      const floorBurstP95Ms = 0.95 * appCpuBurstMs;
       const times = burst.answers.map((a) => a.ms);
       const failed = burst.answers.filter((a) => !a.ok);
       for (const f of failed.slice(0, 3)) opts.log(`P6 run ${rep + 1}: error ${f.problem}`);
@@ -90,8 +97,11 @@ export async function benchPhoneBurst(opts: {
         detail: { burstErrors: failed.length, singlePhoneErrors: single.errors },
       });
       floor.push({
-        value: floorAllMs / single.p50Ms,
+        value: floorBurstP95Ms / single.p50Ms,
         detail: {
+          appCpuDuringBurstMs: Math.round(appCpuBurstMs),
+          floorP95MsFromBurst: Math.round(floorBurstP95Ms),
+          floorRatioFromSinglePhoneCpu: Number((floorAllMs / single.p50Ms).toFixed(2)),
           cpuMsPerRequestApp: Number((cpu.app * 1000).toFixed(1)),
           cpuMsPerRequestWorker: Number((cpu.worker * 1000).toFixed(1)),
           cpuMsPerRequestMariadb: Number((cpu.mariadb * 1000).toFixed(1)),
@@ -106,7 +116,7 @@ export async function benchPhoneBurst(opts: {
         },
       });
       opts.log(
-        `P6 run ${rep + 1}: ${n} phones p50 ${Math.round(p50)} ms, p95 ${Math.round(p95)} ms, max ${Math.round(max)} ms, ${failed.length} errors; one phone p50 ${Math.round(single.p50Ms)} ms; CPU/request app ${(cpu.app * 1000).toFixed(1)} ms, worker ${(cpu.worker * 1000).toFixed(1)} ms, MariaDB ${(cpu.mariadb * 1000).toFixed(1)} ms → floor p95 ${Math.round(floorAllMs)} ms`,
+        `P6 run ${rep + 1}: ${n} phones p50 ${Math.round(p50)} ms, p95 ${Math.round(p95)} ms, max ${Math.round(max)} ms, ${failed.length} errors; one phone p50 ${Math.round(single.p50Ms)} ms; CPU/request app ${(cpu.app * 1000).toFixed(1)} ms, worker ${(cpu.worker * 1000).toFixed(1)} ms, MariaDB ${(cpu.mariadb * 1000).toFixed(1)} ms; app CPU during the burst ${Math.round(appCpuBurstMs)} ms → floor p95 ${Math.round(floorBurstP95Ms)} ms`,
       );
 
       // P2b: the same burst again, each phone polling its cars' verdicts as the entrant.
@@ -179,10 +189,10 @@ export async function benchPhoneBurst(opts: {
     makeFigure(
       {
         id: "P6 floor",
-        label: `${n}·CPU/cores ÷ p50 one phone`,
+        label: "0.95·app CPU of burst ÷ p50 one phone",
         unit: "ratio",
         target: null,
-        definition: `the least P6 a perfect server could show here: ${n} × the CPU one request costs (app + worker + MariaDB, from /proc over the single-phone run) ÷ ${opts.cores} cores, ÷ the one-phone p50; above 3, the P6 target is below the physical floor`,
+        definition: `the least P6 this server could show here: the app is one Node thread, so the 95th of ${n} answers cannot come before 95 % of the CPU time the app spent on the burst (read from /proc during the burst) has passed; ÷ the one-phone p50. Above 3, the P6 target is below the floor; the single-phone estimate (${n} × CPU per request of app + worker + MariaDB ÷ ${opts.cores} cores) is kept in the details`,
       },
       floor,
     ),
