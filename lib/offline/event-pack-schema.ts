@@ -77,6 +77,13 @@ export const eventPackSchema = z.object({
   revokedPassIds: z.array(z.string()),
   verdicts: z.array(packVerdictSchema),
   records: z.array(packRecordSchema),
+  /** A digest of `entries`: a phone that sends it back (`?entries=`) with a partial request gets
+   *  no entries when they are unchanged (`keptEntries`), only what changed. */
+  entriesTag: z.string().optional(),
+  /** In a partial pack: the entries the phone has are current (sent empty here; keep yours). */
+  keptEntries: z.boolean().optional(),
+  /** In a partial pack: the phone has this rule-set version already (sent null here; keep it). */
+  keptRuleSet: z.boolean().optional(),
 });
 
 export type EventPack = z.infer<typeof eventPackSchema>;

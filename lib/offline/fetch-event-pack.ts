@@ -20,7 +20,12 @@ export async function fetchEventPack(
   const stored = await loadEventPack(eventId);
   // Format 2: this phone merges verdicts by entry, so a partial pack may carry only new ones.
   const query = new URLSearchParams({ format: "2" });
-  if (stored?.recordsCursor) query.set("since", stored.recordsCursor);
+  if (stored?.recordsCursor) {
+    query.set("since", stored.recordsCursor);
+    // What this phone holds: the server leaves those out of the refresh when they are current.
+    if (stored.entriesTag) query.set("entries", stored.entriesTag);
+    query.set("rules", stored.ruleSetVersionId);
+  }
   let response: Response;
   try {
     response = await fetchImpl(`/api/events/${eventId}/pack?${query}`, {

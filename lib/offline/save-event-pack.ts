@@ -12,13 +12,27 @@ export type StoredPack = EventPack & { fetchedAt: string };
  * pack replaces what was stored.
  */
 export async function saveEventPack(pack: EventPack, fetchedAt: Date): Promise<StoredPack> {
-  const merge = (previous: StoredPack | undefined): StoredPack => ({
-    ...pack,
-    records: previous ? mergeRecords(previous.records, pack.records) : pack.records,
-    verdicts: previous ? mergeVerdicts(previous.verdicts, pack.verdicts) : pack.verdicts,
-    partial: false,
-    fetchedAt: fetchedAt.toISOString(),
-  });
+  const merge = (previous: StoredPack | undefined): StoredPack => {
+    // Parts the server left out because the phone had them: keep the stored ones — if what is
+    // stored is still what the request said it was; else forget the cursor and ETag, so the
+    // next refresh brings the whole pack.
+    const entriesHeld = !pack.keptEntries || previous?.entriesTag === pack.entriesTag;
+    const ruleSetHeld = !pack.keptRuleSet || previous?.ruleSetVersionId === pack.ruleSetVersionId;
+    const whole = entriesHeld && ruleSetHeld;
+    return {
+      ...pack,
+      entries: pack.keptEntries ? (previous?.entries ?? []) : pack.entries,
+      ruleSet: pack.keptRuleSet ? previous?.ruleSet : pack.ruleSet,
+      keptEntries: false,
+      keptRuleSet: false,
+      etag: whole ? pack.etag : "",
+      recordsCursor: whole ? pack.recordsCursor : null,
+      records: previous ? mergeRecords(previous.records, pack.records) : pack.records,
+      verdicts: previous ? mergeVerdicts(previous.verdicts, pack.verdicts) : pack.verdicts,
+      partial: false,
+      fetchedAt: fetchedAt.toISOString(),
+    };
+  };
   let stored = merge(undefined);
   // Read and write in one IndexedDB transaction: two refreshes saving at once never lose a merge.
   await update<StoredPack>(

@@ -23,8 +23,10 @@ const CURSOR_SAFETY_MS = 10_000;
 /**
  * Everything the tech line needs offline for one event. With `since` (a cursor from an earlier
  * pack), only the records received after it and — when the phone merges verdicts by entry
- * (`partialVerdicts`, pack format 2) — only the verdicts computed after it; the rest (event,
- * rule set, entries, officials, pass keys, revoked passes) is small and always whole.
+ * (`partialVerdicts`, pack format 2) — only the verdicts computed after it; the entries and the
+ * rule set are left out when the phone says it has them as they are (`phoneHas`: the entries'
+ * digest, the rule-set version); the rest (event, officials, pass keys, revoked passes) is small
+ * and always whole.
  *
  * The ETag comes first, from the small parts and cheap aggregates of records and verdicts, so a
  * phone whose pack is current gets `pack: null` (→ 304) without a record or verdict being read.
@@ -37,12 +39,15 @@ export async function buildEventPack({
   partialVerdicts,
   now,
   ifNoneMatch,
+  phoneHas = {},
 }: {
   eventId: string;
   since: Date | null;
   partialVerdicts: boolean;
   now: Date;
   ifNoneMatch: string | null;
+  /** What the phone already holds (from its stored pack): a partial pack leaves out what matches. */
+  phoneHas?: { entriesTag?: string; ruleSetVersionId?: string };
 }): Promise<{ etag: string; pack: EventPack | null }> {
   const [summary, context] = await Promise.all([
     getEventSummary({ eventId }),
@@ -91,6 +96,14 @@ export async function buildEventPack({
   const etag = `"${digest}"`;
   if (ifNoneMatch === etag) return { etag, pack: null };
 
+  const entriesTag = createHash("sha256")
+    .update(JSON.stringify(entries))
+    .digest("base64url")
+    .slice(0, 22);
+  // A refresh leaves out the parts the phone already has, unchanged: a day's refreshes then grow
+  // with what happened since, not with the size of the event.
+  const keptEntries = since !== null && phoneHas.entriesTag === entriesTag;
+  const keptRuleSet = since !== null && phoneHas.ruleSetVersionId === context.ruleSetVersionId;
   const [verdicts, records] = await Promise.all([
     listEventVerdicts({ eventId, since: partialVerdicts ? since : null }),
     listEventRecordsSince({ eventId, since }),
@@ -105,9 +118,12 @@ export async function buildEventPack({
       recordsCursor: new Date(now.getTime() - CURSOR_SAFETY_MS).toISOString(),
       partial: since !== null,
       event,
-      ruleSet: context.ruleSet,
+      ruleSet: keptRuleSet ? null : context.ruleSet,
       ruleSetVersionId: context.ruleSetVersionId,
-      entries,
+      entries: keptEntries ? [] : entries,
+      entriesTag,
+      keptEntries,
+      keptRuleSet,
       officials,
       passKeys,
       revokedPassIds,

@@ -56,6 +56,9 @@ export async function measurePackSize({
     throw new Error(`the whole pack answered ${whole.sample.status}: sign in as an official`);
   await between?.();
   packUrl.searchParams.set("since", whole.pack.recordsCursor ?? "");
+  // As the phone asks (lib/offline/fetch-event-pack.ts): it says which entries and rule set it has.
+  if (whole.pack.entriesTag) packUrl.searchParams.set("entries", whole.pack.entriesTag);
+  packUrl.searchParams.set("rules", whole.pack.ruleSetVersionId);
   const refresh = await sample(get, packUrl.toString(), { "if-none-match": whole.pack.etag });
   return { full: whole.sample, partial: refresh.sample };
 }
@@ -67,6 +70,8 @@ type PackCounts = {
   verdicts: unknown[];
   entries: unknown[];
   ruleSet: unknown;
+  entriesTag?: string;
+  ruleSetVersionId: string;
 };
 
 const jsonBytes = (value: unknown) =>

@@ -134,4 +134,48 @@ describe("saveEventPack", () => {
     expect(stored.verdicts).toEqual([verdict("a", "cleared", 9)]);
     expect(stored.records).toEqual([]);
   });
+
+  it("keeps the entries and rule set it holds when a refresh leaves them out", async () => {
+    const eventId = "event-kept";
+    const first = pack(eventId, { verdicts: [], records: [], entriesTag: "t1", ruleSet: { v: 1 } });
+    await saveEventPack(first, new Date(T0));
+    const stored = await saveEventPack(
+      pack(eventId, {
+        partial: true,
+        etag: '"e2"',
+        verdicts: [],
+        records: [record("r1", "a", 5)],
+        entries: [],
+        entriesTag: "t1",
+        keptEntries: true,
+        ruleSet: null,
+        keptRuleSet: true,
+      }),
+      new Date(T0 + 10_000),
+    );
+    expect(stored.entries).toEqual(first.entries);
+    expect(stored.ruleSet).toEqual({ v: 1 });
+    expect(stored).toMatchObject({ etag: '"e2"', keptEntries: false, keptRuleSet: false });
+  });
+
+  it("asks for the whole pack next time when what it holds is not what the refresh assumed", async () => {
+    const eventId = "event-kept-stale";
+    await saveEventPack(
+      pack(eventId, { verdicts: [], records: [], entriesTag: "t1" }),
+      new Date(T0),
+    );
+    const stored = await saveEventPack(
+      pack(eventId, {
+        partial: true,
+        verdicts: [],
+        records: [],
+        entries: [],
+        entriesTag: "t2", // another refresh stored other entries meanwhile: what it holds is not "t2"
+        keptEntries: true,
+      }),
+      new Date(T0 + 10_000),
+    );
+    // No cursor and no ETag: the next refresh is a whole pack, entries and all.
+    expect(stored).toMatchObject({ recordsCursor: null, etag: "" });
+  });
 });

@@ -219,6 +219,40 @@ describe("GET /api/events/[eventId]/pack?since=…&format=2", () => {
     expect(answer.pack?.records.find(ofCar(steadyCar))).toBeUndefined();
   });
 
+  it("leaves out the entries and rule set the phone has, and sends the entries again once one changes", async () => {
+    const since = encodeURIComponent(full.recordsCursor ?? "");
+    const has = `&entries=${full.entriesTag}&rules=${full.ruleSetVersionId}`;
+    const unchanged = await getPack(`?format=2&since=${since}${has}`);
+    expect(unchanged.pack).toMatchObject({ keptEntries: true, keptRuleSet: true, entries: [] });
+    expect(unchanged.pack?.ruleSet).toBeNull();
+    // A phone holding other entries (an older list) gets the whole list.
+    const stale = await getPack(`?format=2&since=${since}&entries=older&rules=older`);
+    expect(stale.pack?.keptEntries).toBe(false);
+    expect(stale.pack?.entries.length).toBe(full.entries.length);
+    expect(stale.pack?.ruleSet).not.toBeNull();
+    // An entry changes (its car's colour): the digest moves and the list comes whole again.
+    const [car] = await queryTestDb<{ id: string; colour: string | null }>(
+      databaseUrl,
+      "select c.id, c.colour from cars c join entries e on e.car_id = c.id where e.id = ?",
+      [steadyCar],
+    );
+    await queryTestDb(databaseUrl, "update cars set colour = ? where id = ?", [
+      `${car?.colour ?? ""} (repainted)`,
+      car?.id,
+    ]);
+    try {
+      const changed = await getPack(`?format=2&since=${since}${has}`);
+      expect(changed.pack?.keptEntries).toBe(false);
+      expect(changed.pack?.entriesTag).not.toBe(full.entriesTag);
+      expect(changed.pack?.entries.length).toBe(full.entries.length);
+    } finally {
+      await queryTestDb(databaseUrl, "update cars set colour = ? where id = ?", [
+        car?.colour ?? null,
+        car?.id,
+      ]);
+    }
+  });
+
   it("is measured by the bench: a refresh after one sync is a small part of the whole pack", async () => {
     const officialId = await fx.userId(demo.scrutineer);
     const sizes = await measurePackSize({
@@ -237,7 +271,10 @@ describe("GET /api/events/[eventId]/pack?since=…&format=2", () => {
         );
       },
     });
-    expect(sizes.full).toMatchObject({ status: 200, entries: sizes.partial.entries });
+    // The phone said which entries and rule set it holds: unchanged, they are left out.
+    expect(sizes.full.entries).toBeGreaterThan(0);
+    expect(sizes.partial.entries).toBe(0);
+    expect(sizes.partial.partBytes.ruleSet).toBeLessThanOrEqual(4); // null
     expect(sizes.partial.status).toBe(200);
     expect(sizes.partial.records).toBeGreaterThanOrEqual(1);
     expect(sizes.partial.records).toBeLessThan(sizes.full.records);

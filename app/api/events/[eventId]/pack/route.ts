@@ -10,6 +10,9 @@ const packQuery = z.object({
   // Pack format 2: the phone merges verdicts by entry, so a partial pack's verdicts can be
   // partial too. Without it (a page loaded before format 2), a partial pack keeps every verdict.
   format: z.enum(["1", "2"], { message: "format must be 1 or 2" }).optional(),
+  // What the phone's stored pack holds: a partial pack leaves these out when they are current.
+  entries: z.string().max(64).optional(),
+  rules: z.string().max(64).optional(),
 });
 
 // GET /api/events/[eventId]/pack — the event pack a scrutineer's phone keeps for offline use.
@@ -26,6 +29,7 @@ export const GET = defineRoute({
       partialVerdicts: query.format === "2",
       now: clock.now(),
       ifNoneMatch: request.headers.get("if-none-match"),
+      phoneHas: { entriesTag: query.entries, ruleSetVersionId: query.rules },
     });
     const headers = { etag, "cache-control": "private, no-cache" };
     if (!pack) return new NextResponse(null, { status: 304, headers });
