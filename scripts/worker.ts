@@ -5,7 +5,7 @@
 import { closeDb } from "../db/client";
 import { env } from "../lib/env";
 import { workQueue } from "../lib/jobs/work-queue";
-import { getMailTransport } from "../lib/mail/mail-transport";
+import { closeMailTransport } from "../lib/mail/mail-transport";
 
 const parent = process.ppid;
 let stop: () => void = () => undefined;
@@ -31,6 +31,6 @@ await workQueue({
   stopped,
 });
 clearInterval(watchdog);
-getMailTransport().close();
+closeMailTransport();
 await closeDb();
 console.log("[worker] stopped");

@@ -26,7 +26,6 @@ export async function getEntryVerdict({ entryId }: { entryId: string }) {
       finalClass: verdicts.finalClass,
       reason: verdicts.reason,
       result: verdicts.result,
-      resultHash: verdicts.resultHash,
       computedAt: verdicts.computedAt,
       ruleSetBody: ruleSetVersions.body,
     })

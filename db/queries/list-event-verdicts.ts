@@ -22,7 +22,6 @@ export async function listEventVerdicts({
       classId: verdicts.finalClass,
       reason: verdicts.reason,
       result: verdicts.result,
-      resultHash: verdicts.resultHash,
       computedAt: verdicts.computedAt,
     })
     .from(verdicts)
@@ -32,11 +31,7 @@ export async function listEventVerdicts({
         : eq(verdicts.eventId, eventId),
     );
   return rows.flatMap((r) => {
-    const verdict = parseStoredVerdict({
-      entryId: r.entryId,
-      result: r.result,
-      resultHash: r.resultHash,
-    });
+    const verdict = parseStoredVerdict({ entryId: r.entryId, result: r.result });
     if (!verdict) return [];
     return [
       toPackVerdict({

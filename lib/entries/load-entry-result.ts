@@ -20,11 +20,7 @@ export async function loadEntryResult({
 }): Promise<EntryResult> {
   const { row } = await authorizeEntryRead({ entryId, user });
   // A stored verdict that does not read as one counts as none: the car shows as Waiting.
-  const verdict = parseStoredVerdict({
-    entryId: row.entryId,
-    result: row.result,
-    resultHash: row.resultHash,
-  });
+  const verdict = parseStoredVerdict({ entryId: row.entryId, result: row.result });
   const names = classNamesFromRuleSet(row.ruleSetBody);
   const className = (id: string | null) => (id ? (names[id] ?? id) : null);
   const order: Record<string, number> = {

@@ -3,9 +3,11 @@ import { type Verdict, verdictSchema } from "../scrutineer/verdict-schema";
 // Entries already reported by this process, so a phone fetching its pack every 15 s does not
 // repeat the same line; bounded, and forgotten when full.
 const reported = new Set<string>();
-// Verdicts already read, by the hash of their stored JSON (`verdicts.result_hash`): the same
-// result is parsed once, not on every poll of an entry page or pack. Bounded; the oldest go first.
-const parsedByHash = new Map<string, Verdict>();
+// Verdicts already read, by entry, with the exact JSON they were read from: the same stored
+// result is parsed once, not on every poll of an entry page or pack, and any other content (a
+// new verdict, or a row damaged in the database) is read through the schema again. Bounded; the
+// oldest go first.
+const parsedByEntry = new Map<string, { json: string; verdict: Verdict }>();
 const MAX_PARSED = 2000;
 
 /**
@@ -14,29 +16,25 @@ const MAX_PARSED = 2000;
  * caller shows the car as Waiting, and the server log says which entry and what did not match,
  * so a recompute can put it right. Never throws.
  * @param result the stored JSON, as the driver hands it over
- * @param resultHash the row's `result_hash` (SHA-256 of the stored JSON), when it has one
  */
 export function parseStoredVerdict({
   entryId,
   result,
-  resultHash = null,
 }: {
   entryId: string;
   result: unknown;
-  resultHash?: string | null;
 }): Verdict | null {
   if (result === null || result === undefined) return null;
-  const known = resultHash ? parsedByHash.get(resultHash) : undefined;
-  if (known) return known;
+  const json = typeof result === "string" ? result : JSON.stringify(result);
+  const known = parsedByEntry.get(entryId);
+  if (known && known.json === json) return known.verdict;
   const parsed = verdictSchema.safeParse(result);
   if (parsed.success) {
-    if (resultHash) {
-      if (parsedByHash.size >= MAX_PARSED) {
-        const oldest = parsedByHash.keys().next().value;
-        if (oldest !== undefined) parsedByHash.delete(oldest);
-      }
-      parsedByHash.set(resultHash, parsed.data);
+    if (parsedByEntry.size >= MAX_PARSED) {
+      const oldest = parsedByEntry.keys().next().value;
+      if (oldest !== undefined) parsedByEntry.delete(oldest);
     }
+    parsedByEntry.set(entryId, { json, verdict: parsed.data });
     return parsed.data;
   }
   const issues = parsed.error.issues

@@ -21,3 +21,9 @@ export function getMailTransport(): nodemailer.Transporter {
   });
   return globalForMail.plumblineMail;
 }
+
+/** Close the pooled connections and forget the transport (the worker on its way out, tests). */
+export function closeMailTransport(): void {
+  globalForMail.plumblineMail?.close();
+  globalForMail.plumblineMail = undefined;
+}

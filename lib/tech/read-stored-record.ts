@@ -2,8 +2,9 @@ import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
 
 // Records are never updated once stored, so a record read through the schema stays read: a car's
 // verdict is re-derived after every batch from all its records, and re-checking the same rows
-// each time was most of the worker's work. Bounded; the oldest go first.
-const readById = new Map<string, TechRecord>();
+// each time was most of the worker's work. Each is kept with the exact row it came from, so a row
+// changed in the database is read through the schema again. Bounded; the oldest go first.
+const readById = new Map<string, { json: string; record: TechRecord }>();
 const MAX_KEPT = 50_000;
 
 /**
@@ -12,8 +13,10 @@ const MAX_KEPT = 50_000;
  * database, which is logged, never dropped in silence.
  */
 export function readStoredRecord(row: { id: string; entryId: string }): TechRecord | null {
+  // Kept with the exact row it was read from: a row that differs (damage) is read again.
+  const json = JSON.stringify(row);
   const known = readById.get(row.id);
-  if (known && known.entryId === row.entryId) return known;
+  if (known && known.json === json) return known.record;
   const parsed = recordSchema.safeParse(row);
   if (!parsed.success) {
     console.error("[verdicts] a stored record does not read as one", row.id, parsed.error.message);
@@ -23,6 +26,6 @@ export function readStoredRecord(row: { id: string; entryId: string }): TechReco
     const oldest = readById.keys().next().value;
     if (oldest !== undefined) readById.delete(oldest);
   }
-  readById.set(row.id, parsed.data);
+  readById.set(row.id, { json, record: parsed.data });
   return parsed.data;
 }

@@ -28,6 +28,8 @@ export async function measureSyncThroughput(opts: {
   cars: readonly string[];
   batches: number;
   concurrency: number;
+  /** Records in a batch (the phones' 50 unless given). */
+  batchSize?: number;
 }): Promise<ThroughputResult> {
   let made = 0;
   let storedRecords = 0;
@@ -50,7 +52,12 @@ export async function measureSyncThroughput(opts: {
           const entryIds = [opts.cars[first], opts.cars[(first + 1) % opts.cars.length]].filter(
             (id): id is string => id !== undefined,
           );
-          const records = makeSyncBatch({ entryIds, officialId: opts.officialId, deviceId });
+          const records = makeSyncBatch({
+            entryIds,
+            officialId: opts.officialId,
+            deviceId,
+            size: opts.batchSize,
+          });
           // One request in flight per connection: its context carries the batch's cars.
           (context as { entryIds?: string[] }).entryIds = entryIds;
           return { ...request, body: syncBody(deviceId, records) };

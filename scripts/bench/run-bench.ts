@@ -121,6 +121,7 @@ async function runFigures(
       session: first.session,
       officialId: first.officialId,
       sizes: options.sizes,
+      workerPid: stack.workerPid,
       log,
     }),
   );

@@ -22,17 +22,21 @@ describe("parseStoredVerdict: the verdicts table's JSON, read through the verdic
     expect(parseStoredVerdict({ entryId: "e-1", result: stored })).toEqual(verdict);
   });
 
-  it("reads the JSON of one stored hash once, and another hash anew", () => {
+  it("reads one entry's stored JSON once, and reads it again when it changes", () => {
     const stored: unknown = JSON.parse(JSON.stringify(verdict));
-    const first = parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-1" });
+    const first = parseStoredVerdict({ entryId: "e-9", result: stored });
     expect(first).toEqual(verdict);
-    // The same hash: the verdict already read (the same object), not a second parse.
-    expect(parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-1" })).toBe(first);
-    // Another hash, or none: parsed again (an equal but new object).
-    const second = parseStoredVerdict({ entryId: "e-9", result: stored, resultHash: "h-2" });
-    expect(second).toEqual(verdict);
-    expect(second).not.toBe(first);
-    expect(parseStoredVerdict({ entryId: "e-9", result: stored })).not.toBe(first);
+    // The same JSON again: the verdict already read (the same object), not a second parse.
+    const again: unknown = JSON.parse(JSON.stringify(verdict));
+    expect(parseStoredVerdict({ entryId: "e-9", result: again })).toBe(first);
+    // Other JSON for that entry (a new verdict, or damage): read through the schema again.
+    const changed = { ...(stored as object), reason: "another reason" };
+    const second = parseStoredVerdict({ entryId: "e-9", result: changed });
+    expect(second?.reason).toBe("another reason");
+    vi.spyOn(console, "error").mockImplementation(() => undefined);
+    expect(
+      parseStoredVerdict({ entryId: "e-9", result: { ...changed, status: "bogus" } }),
+    ).toBeNull();
   });
 
   it("gives a verdict stored before `rejectedOverride` existed its default", () => {

@@ -9,7 +9,9 @@ const databaseUrl = inject("databaseUrl");
 type Report = { ok: boolean; checks?: Record<string, { ok: boolean; detail: string }> };
 
 describe("GET /api/health", () => {
-  afterEach(() => {
+  afterEach(async () => {
+    // The mail transport is kept on globalThis across module reloads: start each test without it.
+    (await import("@/lib/mail/mail-transport")).closeMailTransport();
     vi.unstubAllEnvs();
     vi.resetModules();
   });
