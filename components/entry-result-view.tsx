@@ -52,6 +52,11 @@ export function EntryResultView({ entryId }: { entryId: string }) {
           . Provisional until protest time has passed.
         </p>
       ) : null}
+      {data.recomputing ? (
+        <p className="text-base font-semibold" role="status" data-testid="entry-result-recomputing">
+          New readings from the tech line are being checked; this result may change in a moment.
+        </p>
+      ) : null}
       {data.lines.length > 0 ? (
         <ul className="space-y-1">
           {data.lines.map((line) => (

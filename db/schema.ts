@@ -484,13 +484,16 @@ export const jobs = mysqlTable(
     attempts: int("attempts").notNull().default(0),
     runAfter: datetime("run_after", { mode: "date", fsp: 3 }).notNull(),
     lockedUntil: datetime("locked_until", { mode: "date", fsp: 3 }),
+    /** Which claim holds the job: finishing, retrying and renewing need it (a worker whose lease
+     *  ran out cannot touch a job another has taken since). */
+    leaseToken: key("lease_token", 36),
     lastError: varchar("last_error", { length: 1000 }),
     createdAt: createdAt(),
     doneAt: datetime("done_at", { mode: "date", fsp: 3 }),
   },
   (t) => [
     uniqueIndex("jobs_dedupe_idx").on(t.dedupeKey),
-    index("jobs_due_idx").on(t.status, t.runAfter),
+    index("jobs_due_idx").on(t.status, t.kind, t.runAfter),
   ],
 );
 

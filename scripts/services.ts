@@ -39,7 +39,10 @@ async function stop(signal: string) {
 const watchdog = setInterval(() => {
   try {
     process.kill(parent, 0);
-  } catch {
+  } catch (error) {
+    // Only "no such process" means it has gone: EPERM (a parent of another user, such as the
+    // service manager) means it is there.
+    if ((error as NodeJS.ErrnoException).code !== "ESRCH") return;
     void stop("parent gone");
   }
 }, 2000);

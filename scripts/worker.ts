@@ -17,7 +17,10 @@ process.on("SIGTERM", () => stop());
 const watchdog = setInterval(() => {
   try {
     process.kill(parent, 0);
-  } catch {
+  } catch (error) {
+    // Only "no such process" means it has gone: EPERM (a parent of another user, such as the
+    // service manager) means it is there.
+    if ((error as NodeJS.ErrnoException).code !== "ESRCH") return;
     stop();
   }
 }, 2000);

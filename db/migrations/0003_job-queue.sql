@@ -7,6 +7,7 @@ CREATE TABLE `jobs` (
 	`attempts` int NOT NULL DEFAULT 0,
 	`run_after` datetime(3) NOT NULL,
 	`locked_until` datetime(3),
+	`lease_token` varchar(36) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin,
 	`last_error` varchar(1000),
 	`created_at` datetime(3) NOT NULL,
 	`done_at` datetime(3),
@@ -17,4 +18,4 @@ CREATE TABLE `jobs` (
 ALTER TABLE `mail_log` ADD `job_id` bigint unsigned;--> statement-breakpoint
 ALTER TABLE `verdicts` ADD `result_hash` varchar(64) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin;--> statement-breakpoint
 ALTER TABLE `mail_log` ADD CONSTRAINT `mail_log_job_sent_idx` UNIQUE(`job_id`);--> statement-breakpoint
-CREATE INDEX `jobs_due_idx` ON `jobs` (`status`,`run_after`);
+CREATE INDEX `jobs_due_idx` ON `jobs` (`status`,`kind`,`run_after`);

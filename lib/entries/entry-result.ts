@@ -18,4 +18,6 @@ export type EntryResult = {
   lines: { outcome: string; reason: string }[];
   notice: string | null;
   computedAt: string | null;
+  /** New records arrived and the server is re-deriving this verdict: it may change shortly. */
+  recomputing: boolean;
 };

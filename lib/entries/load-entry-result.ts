@@ -1,4 +1,5 @@
 import "server-only";
+import { isRecomputePending } from "../../db/queries/jobs/is-recompute-pending";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
 import { authorizeEntryRead } from "../auth/authorize-entry-read";
 import type { SessionUser } from "../auth/get-session-user";
@@ -18,6 +19,9 @@ export async function loadEntryResult({
   entryId: string;
   user: SessionUser;
 }): Promise<EntryResult> {
+  // Asked before the verdict is read: "not recomputing" then means the verdict read counts every
+  // record stored so far.
+  const recomputing = await isRecomputePending({ entryId });
   const { row } = await authorizeEntryRead({ entryId, user });
   // A stored verdict that does not read as one counts as none: the car shows as Waiting.
   const verdict = parseStoredVerdict({ entryId: row.entryId, result: row.result });
@@ -69,5 +73,6 @@ export async function loadEntryResult({
     lines,
     notice: verdict?.notice ?? null,
     computedAt: verdict && row.computedAt ? row.computedAt.toISOString() : null,
+    recomputing,
   };
 }

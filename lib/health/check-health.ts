@@ -29,7 +29,7 @@ const JOB_WAIT_LIMIT_SECONDS = 300;
 
 /**
  * Can the app reach its database and its mail server right now, and is the job worker keeping
- * up (no job waiting over five minutes)?
+ * up (no job waiting over five minutes, none given up)?
  */
 export async function checkHealth(): Promise<HealthReport> {
   const [database, mail, jobs] = await Promise.allSettled([
@@ -49,8 +49,8 @@ export async function checkHealth(): Promise<HealthReport> {
     jobs:
       jobs.status === "fulfilled"
         ? {
-            ok: jobs.value.oldestSeconds <= JOB_WAIT_LIMIT_SECONDS,
-            detail: `${jobs.value.open} waiting (oldest ${jobs.value.oldestSeconds} s), ${jobs.value.failed} given up${jobs.value.oldestSeconds > JOB_WAIT_LIMIT_SECONDS ? ": is the worker running? (npm run worker)" : ""}`,
+            ok: jobs.value.oldestSeconds <= JOB_WAIT_LIMIT_SECONDS && jobs.value.failed === 0,
+            detail: `${jobs.value.open} waiting (oldest ${jobs.value.oldestSeconds} s), ${jobs.value.failed} given up${jobs.value.oldestSeconds > JOB_WAIT_LIMIT_SECONDS ? ": is the worker running? (npm run worker)" : ""}${jobs.value.failed > 0 ? ": see jobs.last_error, mend the cause, then npm run jobs:retry-failed" : ""}`,
           }
         : { ok: false, detail: `job queue unreadable: ${reason(jobs.reason)}` },
   };

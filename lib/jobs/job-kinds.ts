@@ -17,6 +17,9 @@ export const sendMailPayload = z.object({
   html: z.string(),
   kind: z.string(),
   eventId: z.string().nullable().optional(),
+  /** Made when the mail is queued, so every attempt (and a restored backup's new jobs) carries
+   *  its own Message-ID, the same on each try. */
+  messageId: z.string().optional(),
 });
 
 export type SendMailPayload = z.infer<typeof sendMailPayload>;

@@ -1,29 +1,17 @@
 import "server-only";
 import { clock } from "../clock";
 import { recomputeVerdicts } from "../tech/recompute-verdicts";
-import { recomputeVerdictsPayload } from "./job-kinds";
 
 /**
- * Re-derive the verdicts a set of claimed recompute jobs asks for, merged: one recompute per
- * event over every entry any of its jobs names (forty phones' batches for one event become one
- * pass, reading each entry's records once and the rule set once).
+ * Re-derive, in one pass, the verdicts of every car a set of claimed recompute jobs of one event
+ * names (forty phones' batches for one event become one pass, reading each car's records once
+ * and the rule set once).
  */
 export async function runRecomputeJobs(
-  jobs: { id: number; payload: unknown }[],
+  eventId: string,
+  jobs: { entryIds: string[] }[],
 ): Promise<{ entries: number; mailsQueued: number }> {
-  const byEvent = new Map<string, Set<string>>();
-  for (const job of jobs) {
-    const { eventId, entryIds } = recomputeVerdictsPayload.parse(job.payload);
-    const set = byEvent.get(eventId) ?? new Set<string>();
-    for (const id of entryIds) set.add(id);
-    byEvent.set(eventId, set);
-  }
-  let entries = 0;
-  let mailsQueued = 0;
-  for (const [eventId, entryIds] of byEvent) {
-    const result = await recomputeVerdicts({ eventId, entryIds: [...entryIds], now: clock.now() });
-    entries += entryIds.size;
-    mailsQueued += result.mailsQueued;
-  }
-  return { entries, mailsQueued };
+  const entryIds = [...new Set(jobs.flatMap((j) => j.entryIds))];
+  const result = await recomputeVerdicts({ eventId, entryIds, now: clock.now() });
+  return { entries: entryIds.length, mailsQueued: result.mailsQueued };
 }

@@ -5,8 +5,8 @@ import { pruneDoneJobs } from "../../db/queries/jobs/prune-done-jobs";
 import { renewJobLeases } from "../../db/queries/jobs/renew-job-leases";
 import { retryJobs } from "../../db/queries/jobs/retry-jobs";
 import { faultPoint } from "./fault-point";
-import { jobBackoffMs, MAX_JOB_ATTEMPTS } from "./job-backoff";
-import { RECOMPUTE_VERDICTS, SEND_MAIL } from "./job-kinds";
+import { jobBackoffMs, maxAttempts } from "./job-backoff";
+import { RECOMPUTE_VERDICTS, recomputeVerdictsPayload, SEND_MAIL } from "./job-kinds";
 import { runMailJob } from "./run-mail-job";
 import { runRecomputeJobs } from "./run-recompute-jobs";
 
@@ -26,9 +26,10 @@ export type WorkQueueOptions = {
 
 /**
  * The worker's loop: claim due jobs, run them, mark them done — or put them back with backoff.
- * Verdict recomputes go first (the tech line waits on them) and are merged; mails follow. A job
- * is held under a lease renewed while it runs; a worker that dies leaves the lease to run out and
- * another (or the same, restarted) takes the job again, so every handler is idempotent.
+ * Verdict recomputes go first (the tech line waits on them), merged per event, each event on its
+ * own (one event's failure holds up no other); mails follow. A job is held under a lease renewed
+ * while it runs; a worker that dies leaves the lease to run out and another (or the same,
+ * restarted) takes the job again, so every handler is idempotent.
  */
 export async function workQueue({ leaseMs, pollMs, stopped, log = console.log }: WorkQueueOptions) {
   let stopping = false;
@@ -48,18 +49,32 @@ export async function workQueue({ leaseMs, pollMs, stopped, log = console.log }:
         kinds: [RECOMPUTE_VERDICTS],
         limit: RECOMPUTE_BATCH,
         leaseMs,
+        maxAttempts: maxAttempts(RECOMPUTE_VERDICTS),
       });
-      if (recompute.length > 0) {
-        worked += recompute.length;
-        await holding(recompute, leaseMs, async () => {
-          const done = await runRecomputeJobs(recompute);
-          faultPoint("worker:recomputed");
-          log(
-            `[worker] ${recompute.length} recompute job(s): ${done.entries} entries, ${done.mailsQueued} mail(s) queued`,
-          );
-        });
+      worked += recompute.length;
+      for (const [eventId, group] of byEvent(recompute)) {
+        await holding(
+          group.map((g) => g.job),
+          leaseMs,
+          async () => {
+            if (eventId === null) throw new Error("the job's payload does not name an event");
+            const done = await runRecomputeJobs(
+              eventId,
+              group.map((g) => ({ entryIds: g.entryIds })),
+            );
+            faultPoint("worker:recomputed");
+            log(
+              `[worker] ${group.length} recompute job(s) of event ${eventId}: ${done.entries} entries, ${done.mailsQueued} mail(s) queued`,
+            );
+          },
+        );
       }
-      const mails = await claimJobs({ kinds: [SEND_MAIL], limit: MAIL_BATCH, leaseMs });
+      const mails = await claimJobs({
+        kinds: [SEND_MAIL],
+        limit: MAIL_BATCH,
+        leaseMs,
+        maxAttempts: maxAttempts(SEND_MAIL),
+      });
       worked += mails.length;
       await Promise.all(mails.map((job) => holding([job], leaseMs, () => runMailJob(job))));
     } catch (error) {
@@ -72,31 +87,49 @@ export async function workQueue({ leaseMs, pollMs, stopped, log = console.log }:
   }
 }
 
-/** Run `work` for claimed jobs with their lease renewed, then finish them or put them back. */
+/** Claimed recompute jobs by event; a payload that does not read goes alone, under `null`. */
+function byEvent(jobs: ClaimedJob[]) {
+  const groups = new Map<string | null, { job: ClaimedJob; entryIds: string[] }[]>();
+  for (const job of jobs) {
+    const parsed = recomputeVerdictsPayload.safeParse(job.payload);
+    const eventId = parsed.success ? parsed.data.eventId : null;
+    const entryIds = parsed.success ? parsed.data.entryIds : [];
+    groups.set(eventId, [...(groups.get(eventId) ?? []), { job, entryIds }]);
+  }
+  return groups;
+}
+
+/**
+ * Run `work` for jobs of one claim with their lease renewed, then finish them, or put each back
+ * after its own backoff — or give it up once it has had its attempts.
+ */
 async function holding(jobs: ClaimedJob[], leaseMs: number, work: () => Promise<unknown>) {
   const ids = jobs.map((j) => j.id);
+  const leaseToken = jobs[0]?.leaseToken ?? "";
   const renew = setInterval(() => {
-    void renewJobLeases({ ids, leaseMs }).catch(() => undefined);
+    void renewJobLeases({ ids, leaseToken, leaseMs }).catch(() => undefined);
   }, leaseMs / 3);
   try {
     await work();
   } catch (error) {
     clearInterval(renew);
-    const attempts = Math.max(...jobs.map((j) => j.attempts));
-    const giveUp = attempts >= MAX_JOB_ATTEMPTS;
-    console.error(
-      `[worker] job(s) ${ids.join(", ")} failed (attempt ${attempts}${giveUp ? ", giving up" : ""}): ${errorText(error)}`,
-    );
-    await retryJobs({
-      ids,
-      error: errorText(error),
-      delayMs: jobBackoffMs(attempts, Math.random()),
-      giveUp,
-    });
+    for (const job of jobs) {
+      const giveUp = job.attempts >= maxAttempts(job.kind);
+      console.error(
+        `[worker] job ${job.id} (${job.kind}) failed, attempt ${job.attempts}${giveUp ? ", giving up" : ""}: ${errorText(error)}`,
+      );
+      await retryJobs({
+        ids: [job.id],
+        leaseToken,
+        error: errorText(error),
+        delayMs: jobBackoffMs(job.attempts, Math.random()),
+        giveUp,
+      });
+    }
     return;
   }
   clearInterval(renew);
-  await finishJobs(ids);
+  await finishJobs({ ids, leaseToken });
 }
 
 function errorText(error: unknown): string {

@@ -17,6 +17,8 @@ export function getMailTransport(): nodemailer.Transporter {
     maxMessages: 100,
     ignoreTLS: env.PLUMBLINE_MODE === "demo",
     connectionTimeout: 5000,
+    // A mail server that takes the connection and then stalls must not hold a job for long.
+    socketTimeout: 30_000,
     greetingTimeout: 5000,
   });
   return globalForMail.plumblineMail;

@@ -11,11 +11,14 @@ export type OutgoingMail = {
   html: string;
   kind: string;
   eventId?: string | null;
+  /** A Message-ID made when the mail was queued (the same on every attempt). */
+  messageId?: string;
 };
 
 /**
  * Send one e-mail and record it in the mail log, whether it went or not. From a job, the mail
- * carries a Message-ID made from the job, so a copy sent again after a crash is the same message,
+ * carries the Message-ID made when it was queued, so a copy sent again after a crash is the same
+ * message,
  * and the line saying it went is written even if the database is away for a while (retried), so
  * a database restart never makes the job send it twice.
  */
@@ -23,8 +26,7 @@ export async function sendMail(
   mail: OutgoingMail,
   { jobId }: { jobId?: number } = {},
 ): Promise<void> {
-  const messageId =
-    jobId === undefined ? undefined : `<job-${jobId}.${new URL(env.APP_URL).hostname}@plumbline>`;
+  const messageId = mail.messageId;
   let info: { messageId: string };
   try {
     info = await getMailTransport().sendMail({

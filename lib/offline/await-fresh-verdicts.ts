@@ -121,12 +121,21 @@ function pause(loop: Loop, ms: number): Promise<void> {
   });
 }
 
-/** Every wanted entry still in the event has a verdict computed at or after its receive time. */
-function isFresh(pack: Pick<EventPack, "entries" | "verdicts">, wanted: Map<string, number>) {
+/**
+ * Every wanted entry still in the event has a verdict computed at or after its receive time, and
+ * none is still being re-derived (a verdict computed a moment after the batch was stamped may
+ * have been read before the batch committed; the batch's own job is then still pending).
+ */
+function isFresh(
+  pack: Pick<EventPack, "entries" | "verdicts" | "pendingVerdicts">,
+  wanted: Map<string, number>,
+) {
   const computedAt = new Map(pack.verdicts.map((v) => [v.entryId, Date.parse(v.computedAt)]));
   const entered = new Set(pack.entries.map((e) => e.entryId));
+  const pending = new Set(pack.pendingVerdicts ?? []);
   for (const [entryId, receivedAt] of wanted) {
     if (!entered.has(entryId)) continue; // withdrawn since: no verdict will come
+    if (pending.has(entryId)) return false;
     const at = computedAt.get(entryId);
     if (at === undefined || at < receivedAt) return false;
   }

@@ -84,6 +84,9 @@ export const eventPackSchema = z.object({
   keptEntries: z.boolean().optional(),
   /** In a partial pack: the phone has this rule-set version already (sent null here; keep it). */
   keptRuleSet: z.boolean().optional(),
+  /** Cars whose verdict the server is re-deriving now (records arrived that it may not count
+   *  yet), as of just before this pack's verdicts were read. Always whole. */
+  pendingVerdicts: z.array(z.string()).optional(),
 });
 
 export type EventPack = z.infer<typeof eventPackSchema>;

@@ -5,6 +5,7 @@ import { getEventRecordsStamp } from "../../db/queries/get-event-records-stamp";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { getEventSummary } from "../../db/queries/get-event-summary";
 import { getEventVerdictsStamp } from "../../db/queries/get-event-verdicts-stamp";
+import { listPendingRecomputes } from "../../db/queries/jobs/list-pending-recomputes";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
 import { listEventPassKeys } from "../../db/queries/list-event-pass-keys";
 import { listEventRecordsSince } from "../../db/queries/list-event-records-since";
@@ -55,15 +56,24 @@ export async function buildEventPack({
   ]);
   if (!summary || !context) throw new AppError("not_found", "No such event.");
   await ensureEventPassKey({ eventId });
-  const [entries, officialRows, passKeys, revokedPassIds, recordsStamp, verdictsStamp] =
-    await Promise.all([
-      listPackEntries({ eventId }),
-      listEventOfficials({ eventId }),
-      listEventPassKeys({ eventId }),
-      listRevokedPassIds({ eventId }),
-      getEventRecordsStamp({ eventId }),
-      getEventVerdictsStamp({ eventId }),
-    ]);
+  const [
+    entries,
+    officialRows,
+    passKeys,
+    revokedPassIds,
+    recordsStamp,
+    verdictsStamp,
+    pendingVerdicts,
+  ] = await Promise.all([
+    listPackEntries({ eventId }),
+    listEventOfficials({ eventId }),
+    listEventPassKeys({ eventId }),
+    listRevokedPassIds({ eventId }),
+    getEventRecordsStamp({ eventId }),
+    getEventVerdictsStamp({ eventId }),
+    // Before the verdicts are read: see listPendingRecomputes.
+    listPendingRecomputes({ eventId }),
+  ]);
   const event = {
     id: summary.id,
     name: summary.name,
@@ -90,6 +100,7 @@ export async function buildEventPack({
         revokedPassIds,
         records: recordsStamp,
         verdicts: verdictsStamp,
+        pendingVerdicts,
       }),
     )
     .digest("base64url");
@@ -124,6 +135,7 @@ export async function buildEventPack({
       entriesTag,
       keptEntries,
       keptRuleSet,
+      pendingVerdicts,
       officials,
       passKeys,
       revokedPassIds,

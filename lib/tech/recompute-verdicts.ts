@@ -5,6 +5,7 @@ import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { listEntryContacts } from "../../db/queries/list-entry-contacts";
 import { saveVerdicts } from "../../db/queries/save-verdicts";
 import { runTransaction } from "../../db/run-transaction";
+import { withNamedLock } from "../../db/with-named-lock";
 import { clock } from "../clock";
 import { env } from "../env";
 import { AppError } from "../errors";
@@ -25,7 +26,8 @@ export type VerdictChange = {
 
 /**
  * Re-derive the verdicts of some entries (all when `entryIds` is omitted) from all their records
- * and the event's pinned rule set (read once), then, in one transaction, store them and enqueue
+ * and the event's pinned rule set (read once), holding the event's recompute lock, then, in one
+ * transaction, store them and enqueue
  * the e-mails of the verdicts that changed — so a recompute run twice (its worker died before
  * marking the job done) finds nothing changed the second time and mails nobody twice. Each entry
  * on its own: an evaluation that throws (a fault in the code) is logged and stored as a verdict
@@ -40,63 +42,67 @@ export async function recomputeVerdicts({
   entryIds?: string[];
   now: Date;
 }): Promise<{ changes: VerdictChange[]; mailsQueued: number }> {
-  const context = await getEventRuleSet({ eventId });
-  if (!context) throw new AppError("not_found", "No such event.");
-  const inputs = await loadEvaluationEntries({ context, entryIds });
-  const results = inputs.map((entryInput) => {
-    const input = { ...entryInput, ruleSet: context.ruleSet };
-    try {
-      return { entryId: input.entry.entryId, verdict: evaluateEntry(input) };
-    } catch (error) {
-      const problem = error instanceof Error ? error.message : String(error);
-      console.error(
-        `verdict of entry ${input.entry.entryId} in event ${eventId} not computed:`,
-        error,
-      );
-      return { entryId: input.entry.entryId, verdict: uncomputedVerdict(input, problem) };
-    }
-  });
-  const rows = results.map(({ entryId, verdict }) => ({
-    entryId,
-    status: verdict.status,
-    finalClass: verdict.classId,
-    needsChief: needsChiefScrutineer(verdict),
-    reason: verdict.reason,
-    result: verdict,
-    resultHash: createHash("sha256").update(stableStringify(verdict)).digest("hex"),
-    recordCount: verdict.records.total,
-  }));
-  return runTransaction(async (tx) => {
-    // Stamped when saved (each attempt anew), not when the work began: a phone's partial pack
-    // finds verdicts by this time, a little behind the pack's own.
-    const computedAt = laterOf(now, clock.now());
-    const before = await saveVerdicts({
-      tx,
-      eventId,
-      ruleSetVersionId: context.ruleSetVersionId,
-      computedAt,
-      rows,
+  // One recompute of an event at a time (the worker's, a pin's): each reads the rule set and
+  // the records after the one before it has saved, so an older verdict never lands last.
+  return withNamedLock(`plumbline-recompute:${eventId}`, 60, async () => {
+    const context = await getEventRuleSet({ eventId });
+    if (!context) throw new AppError("not_found", "No such event.");
+    const inputs = await loadEvaluationEntries({ context, entryIds });
+    const results = inputs.map((entryInput) => {
+      const input = { ...entryInput, ruleSet: context.ruleSet };
+      try {
+        return { entryId: input.entry.entryId, verdict: evaluateEntry(input) };
+      } catch (error) {
+        const problem = error instanceof Error ? error.message : String(error);
+        console.error(
+          `verdict of entry ${input.entry.entryId} in event ${eventId} not computed:`,
+          error,
+        );
+        return { entryId: input.entry.entryId, verdict: uncomputedVerdict(input, problem) };
+      }
     });
-    const changes = results.map(({ entryId, verdict }) => ({
+    const rows = results.map(({ entryId, verdict }) => ({
       entryId,
-      before: before.get(entryId) ?? null,
-      verdict,
+      status: verdict.status,
+      finalClass: verdict.classId,
+      needsChief: needsChiefScrutineer(verdict),
+      reason: verdict.reason,
+      result: verdict,
+      resultHash: createHash("sha256").update(stableStringify(verdict)).digest("hex"),
+      recordCount: verdict.records.total,
     }));
-    const moved = changes.filter((c) => c.verdict.status !== "waiting" && verdictMoved(c));
-    const contacts =
-      moved.length === 0
-        ? []
-        : await listEntryContacts({ eventId, entryIds: moved.map((c) => c.entryId) });
-    const mails = verdictChangeMails({
-      eventId,
-      changes,
-      contacts,
-      ruleSet: context.ruleSet,
-      computedAt,
-      appUrl: env.APP_URL,
+    return runTransaction(async (tx) => {
+      // Stamped when saved (each attempt anew), not when the work began: a phone's partial pack
+      // finds verdicts by this time, a little behind the pack's own.
+      const computedAt = laterOf(now, clock.now());
+      const before = await saveVerdicts({
+        tx,
+        eventId,
+        ruleSetVersionId: context.ruleSetVersionId,
+        computedAt,
+        rows,
+      });
+      const changes = results.map(({ entryId, verdict }) => ({
+        entryId,
+        before: before.get(entryId) ?? null,
+        verdict,
+      }));
+      const moved = changes.filter((c) => c.verdict.status !== "waiting" && verdictMoved(c));
+      const contacts =
+        moved.length === 0
+          ? []
+          : await listEntryContacts({ eventId, entryIds: moved.map((c) => c.entryId) });
+      const mails = verdictChangeMails({
+        eventId,
+        changes,
+        contacts,
+        ruleSet: context.ruleSet,
+        computedAt,
+        appUrl: env.APP_URL,
+      });
+      await enqueueJobs(mails, tx);
+      return { changes, mailsQueued: mails.length };
     });
-    await enqueueJobs(mails, tx);
-    return { changes, mailsQueued: mails.length };
   });
 }
 

@@ -1,3 +1,4 @@
+import { randomUUID } from "node:crypto";
 import type { NewJob } from "../../db/queries/jobs/enqueue-jobs";
 import { SEND_MAIL, type SendMailPayload } from "../jobs/job-kinds";
 import { composeVerdictMail } from "../mail/compose-verdict-mail";
@@ -54,7 +55,13 @@ export function verdictChangeMails({
           ? [
               {
                 kind: SEND_MAIL,
-                payload: { ...mail, to, kind: "verdict", eventId } satisfies SendMailPayload,
+                payload: {
+                  ...mail,
+                  to,
+                  kind: "verdict",
+                  eventId,
+                  messageId: `<${randomUUID()}@${new URL(appUrl).hostname}>`,
+                } satisfies SendMailPayload,
                 dedupeKey: `verdict:${change.entryId}:${computedAt.getTime()}:${to}`,
               },
             ]

@@ -1,5 +1,6 @@
 // P2b's probe: what the entrant's page reads (GET /api/entries/<id>/verdict), asked every ~50 ms
-// until the verdict was computed at or after the batch's receive time.
+// until the verdict was computed at or after the batch's receive time and no recompute of the
+// car is still pending.
 import type { HttpSession } from "../../tests/support/http-session";
 
 export const VERDICT_POLL_MS = 50;
@@ -23,8 +24,14 @@ export async function waitForVerdict(opts: {
       throw new Error(
         `GET /api/entries/${opts.entryId}/verdict answered ${response.status}: ${await response.text()}`,
       );
-    const result = (await response.json()) as { computedAt: string | null };
-    if (result.computedAt !== null && Date.parse(result.computedAt) >= wanted)
+    const result = (await response.json()) as { computedAt: string | null; recomputing?: boolean };
+    // Fresh, and counting the batch: no recompute is still pending for the car (the server
+    // asks that before it reads the verdict).
+    if (
+      result.computedAt !== null &&
+      Date.parse(result.computedAt) >= wanted &&
+      result.recomputing !== true
+    )
       return performance.now() - opts.answeredAt;
     await new Promise((resolve) => setTimeout(resolve, VERDICT_POLL_MS));
   }

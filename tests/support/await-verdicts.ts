@@ -20,9 +20,15 @@ export async function awaitVerdicts(
   while (true) {
     const response = await session.fetch(`/api/events/${eventId}/pack`, { cache: "no-store" });
     if (!response.ok) throw new Error(`pack answered ${response.status}`);
-    const { verdicts } = (await response.json()) as { verdicts: PackVerdict[] };
+    const { verdicts, pendingVerdicts = [] } = (await response.json()) as {
+      verdicts: PackVerdict[];
+      pendingVerdicts?: string[];
+    };
     const fresh = verdicts.filter(
-      (v) => answer.verdictsPending.includes(v.entryId) && Date.parse(v.computedAt) >= after,
+      (v) =>
+        answer.verdictsPending.includes(v.entryId) &&
+        !pendingVerdicts.includes(v.entryId) &&
+        Date.parse(v.computedAt) >= after,
     );
     waiting = answer.verdictsPending.filter((id) => !fresh.some((v) => v.entryId === id));
     if (waiting.length === 0) return fresh;

@@ -24,7 +24,11 @@ const verdict = (entryId: string, status: PackVerdict["status"], computedAtMs: n
   computedAt: new Date(computedAtMs).toISOString(),
 });
 
-function pack(eventId: string, parts: Pick<EventPack, "etag" | "partial" | "verdicts">) {
+function pack(
+  eventId: string,
+  parts: Pick<EventPack, "etag" | "partial" | "verdicts"> &
+    Partial<Pick<EventPack, "pendingVerdicts">>,
+) {
   return {
     packFormat: 2 as const,
     generatedAt: new Date(Date.now()).toISOString(),
@@ -61,7 +65,12 @@ function pack(eventId: string, parts: Pick<EventPack, "etag" | "partial" | "verd
  * the batch was received (never, for null). It answers 304 to the ETag of what it holds and,
  * to a phone sending `since`, only the verdicts computed since (all recomputed ones, here).
  */
-function standInServer(eventId: string, freshAfter: Record<string, number | null>) {
+function standInServer(
+  eventId: string,
+  freshAfter: Record<string, number | null>,
+  /** Cars still being re-derived (listed in the pack's pendingVerdicts) until this many ms. */
+  pendingUntil: Record<string, number> = {},
+) {
   const calls: { at: number; since: string | null; format: string | null }[] = [];
   const fetchImpl = (async (input: unknown, init?: RequestInit) => {
     const url = new URL(String(input), "http://phone.test");
@@ -74,12 +83,20 @@ function standInServer(eventId: string, freshAfter: Record<string, number | null
     const done = Object.entries(freshAfter).flatMap(([entryId, after]) =>
       after !== null && elapsed >= after ? [verdict(entryId, "held", T0 + after)] : [],
     );
-    const etag = `"${done.map((v) => v.entryId).join(",")}"`;
+    const pendingVerdicts = Object.entries(pendingUntil).flatMap(([entryId, until]) =>
+      elapsed < until ? [entryId] : [],
+    );
+    const etag = `"${done.map((v) => v.entryId).join(",")}|${pendingVerdicts.join(",")}"`;
     if (new Headers(init?.headers).get("if-none-match") === etag)
       return new Response(null, { status: 304, headers: { etag } });
     return new Response(
       JSON.stringify(
-        pack(eventId, { etag, partial: url.searchParams.has("since"), verdicts: done }),
+        pack(eventId, {
+          etag,
+          partial: url.searchParams.has("since"),
+          verdicts: done,
+          pendingVerdicts,
+        }),
       ),
       { status: 200, headers: { "content-type": "application/json", etag } },
     );
@@ -146,6 +163,22 @@ describe("awaitFreshVerdicts", () => {
     const stored = await loadEventPack(eventId);
     expect(stored?.verdicts.find((v) => v.entryId === "a")?.status).toBe("held");
     expect(stored?.verdicts.find((v) => v.entryId === "b")?.status).toBe("cleared");
+  });
+
+  it("keeps looking while the server still lists the car as being re-derived", async () => {
+    // A verdict computed after the batch's receive time, but read before the batch committed:
+    // the batch's own job is still pending until 2 s, so that verdict does not count yet.
+    const eventId = "event-pending";
+    await storeStalePack(eventId);
+    const server = standInServer(eventId, { a: 100 }, { a: 2_000 });
+    const outcome = await settle(
+      awaitFreshVerdicts(
+        { eventId, entryIds: ["a"], receivedAt: RECEIVED_AT },
+        { fetchImpl: server.fetchImpl },
+      ),
+    );
+    expect(outcome).toBe("fresh");
+    expect(server.calls.map((c) => c.at)).toEqual([300, 900, 2_100]);
   });
 
   it("gives up 15 s after the answer when the verdict never comes", async () => {
