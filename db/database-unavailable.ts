@@ -25,11 +25,14 @@ const ERRNOS = new Set([1053, 1040, 1927, 2002, 2003, 2006, 2013]);
  */
 export function isDatabaseUnavailable(error: unknown): boolean {
   for (
-    let e = error as { code?: unknown; errno?: unknown; cause?: unknown } | null, depth = 0;
+    let e = error as { code?: unknown; errno?: unknown; cause?: unknown; fatal?: unknown } | null,
+      depth = 0;
     e && depth < 5;
     depth += 1
   ) {
-    if (typeof e.code === "string" && CODES.has(e.code)) return true;
+    // mysql2 marks a lost or refused connection `fatal`; the same codes from S3 or SMTP are not
+    // the database's and stay a 500.
+    if (typeof e.code === "string" && CODES.has(e.code) && e.fatal === true) return true;
     if (typeof e.errno === "number" && ERRNOS.has(e.errno)) return true;
     if (isRetryableLockError(e)) return true;
     e = (e.cause ?? null) as typeof e;

@@ -240,6 +240,24 @@ describe("sync under faults: nothing lost, nothing twice", () => {
       statuses.push([...new Set(body.results.map((r) => r.status))]);
     }
     expect(statuses).toEqual([["stored"], ["duplicate"], ["duplicate"]]);
+    // The same batch twice at the same moment (a retry while the first is still running): both
+    // answered, nothing stored twice.
+    const twice = await Promise.all([
+      postSync(chief, eventId, "chief-phone", batch),
+      postSync(chief, eventId, "chief-phone", batch),
+    ]);
+    expect(twice.map((r) => r.status)).toEqual([200, 200]);
+    // An id already used, with other content: refused, and the stored record is unchanged.
+    const [first] = batch;
+    if (!first) throw new Error("no record");
+    const forged = { ...first, payload: { ...(first.payload as object), reason: "changed later" } };
+    const refused = (await (await postSync(chief, eventId, "chief-phone", [forged])).json()) as {
+      results: { status: string; reason?: string }[];
+    };
+    expect(refused.results[0]).toMatchObject({
+      status: "refused",
+      reason: "This record id was already used for a different record.",
+    });
     expect(await countFor(cars)).toMatchObject({
       records: 12,
       verdictRows: 2,
@@ -362,14 +380,19 @@ describe("sync under faults: nothing lost, nothing twice", () => {
       ),
     ]);
     let requests = 0;
+    const statuses: number[] = [];
     const stopsOnSecondBatch: typeof fetch = async (input, init) => {
       requests += 1;
       if (requests === 2) await stack.stopDatabase();
-      return chief.fetch(String(input), init);
+      const response = await chief.fetch(String(input), init);
+      statuses.push(response.status);
+      return response;
     };
     const during = await drainOutbox({ now: () => Date.now(), fetchImpl: stopsOnSecondBatch });
     expect(during.sent).toBe(50); // the first batch went; the second met the stopped database
     expect(during.waiting).toBe(150);
+    // The database away is the server's passing trouble, said so: 503 with Retry-After, not 500.
+    expect(statuses).toEqual([200, 503]);
     await stack.startDatabase();
     await drainUntilEmpty(chief);
     expect(await phoneStates()).toEqual({ sent: 200 });
