@@ -3,6 +3,7 @@ import { v7 as uuidv7 } from "uuid";
 import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
 import { localRecordIds } from "./support/local-record-ids";
+import { serverVerdictTimes } from "./support/server-verdict-times";
 
 // The demo's class ladder, low → high, as README.md describes the invented event.
 const LADDER = ["Kestrel", "Merlin", "Harrier", "Peregrine"];
@@ -126,6 +127,15 @@ test("the chief scrutineer's queue opens each car; an override is checked, kept 
     },
   });
   expect(sent.status()).toBe(200);
+  // The server's worker re-derives the verdict after the answer (the answer says it is pending).
+  // This phone did not send the record, so it learns the new verdict only from the pack it loads
+  // on opening: open the car once the server has it, as the chief would a moment later. Opening
+  // at once raced the worker (the card kept the earlier verdict when the pack came first).
+  const answer = (await sent.json()) as { receivedAt: string; verdictsPending: string[] };
+  expect(answer.verdictsPending).toEqual([entryId]);
+  await expect
+    .poll(async () => (await serverVerdictTimes([entryId]))[entryId]?.computedAt ?? 0)
+    .toBeGreaterThanOrEqual(Date.parse(answer.receivedAt));
   await page.goto(`/tech/${eventId}?entry=${entryId}`);
   const invalid = page.getByTestId("server-verdict-override-invalid");
   await expect(invalid).toContainText("Override not applied.");

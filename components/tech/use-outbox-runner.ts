@@ -8,8 +8,8 @@ import { resetOutboxBackoff } from "@/lib/offline/reset-outbox-backoff";
 const TICK_MS = 15_000;
 
 /**
- * Keeps the outbox moving while the tech line is open: on opening, on regaining signal, and on a
- * timer (each record's own backoff decides whether it goes). Background Sync covers a closed tab.
+ * Keeps the outbox moving while the tech line is open: on opening and on regaining signal (every
+ * queued record due at once), and on a timer (each record's own backoff decides whether it goes). Background Sync covers a closed tab.
  * After a sync it looks for the server's new verdicts (`awaitFreshVerdicts`, not awaited: the
  * refreshed pack reaches the page through its own announcement).
  */
@@ -42,7 +42,12 @@ export function useOutboxRunner(eventId: string, pending: number) {
     }
   }, []);
 
-  /** "Send now": the scrutineer says there is signal, so no record waits out its retry time. */
+  /**
+   * "Send now", and the browser's word that the signal is back (`online`, or this page opening
+   * with signal): no record waits out its retry time. A drain only sends what is due, so without
+   * this, records that failed while offline (the page opened or reloaded in the pit tries once)
+   * sat out their backoff until the 15 s timer, and no request went through to make them due.
+   */
   const sendNow = useCallback(async () => {
     await resetOutboxBackoff({ now: Date.now(), eventId });
     await drain();
@@ -52,18 +57,18 @@ export function useOutboxRunner(eventId: string, pending: number) {
     setOnline(navigator.onLine);
     const goOnline = () => {
       setOnline(true);
-      void drain();
+      void sendNow();
     };
     const goOffline = () => setOnline(false);
     window.addEventListener("online", goOnline);
     window.addEventListener("offline", goOffline);
     // This page was opened signed in: anything held for sign-in may go now.
-    void requeueSignedOutRecords(eventId).then(() => drain());
+    void requeueSignedOutRecords(eventId).then(() => (navigator.onLine ? sendNow() : drain()));
     return () => {
       window.removeEventListener("online", goOnline);
       window.removeEventListener("offline", goOffline);
     };
-  }, [drain, eventId]);
+  }, [drain, sendNow, eventId]);
 
   useEffect(() => {
     if (pending === 0) return;

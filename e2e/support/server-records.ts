@@ -1,12 +1,5 @@
 import { queryTestDb } from "../../tests/support/query-test-db";
-
-/** The browser tests' database (scripts/e2e.sh makes it and passes its URL in the environment). */
-function databaseUrl(): string {
-  const url = process.env.DATABASE_URL;
-  if (!url)
-    throw new Error("DATABASE_URL is not set: run the browser tests through scripts/e2e.sh");
-  return url;
-}
+import { e2eDatabaseUrl } from "./e2e-database-url";
 
 /**
  * What the server has stored for one entry, read straight from the database (not through the
@@ -15,7 +8,7 @@ function databaseUrl(): string {
 export async function serverRecordsOf(
   entryId: string,
 ): Promise<{ ids: string[]; uploads: number }> {
-  const url = databaseUrl();
+  const url = e2eDatabaseUrl();
   const rows = await queryTestDb<{ id: string }>(
     url,
     "select id from records where entry_id = ? order by id",

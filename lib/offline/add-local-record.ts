@@ -3,6 +3,7 @@ import type { TechRecord } from "../scrutineer/record-schema";
 import { announceChange } from "./announce-change";
 import { idbStores } from "./idb-stores";
 import type { LocalRecord } from "./local-record";
+import { newLocalRecord } from "./new-local-record";
 
 /**
  * Save a record on the phone at once (the outbox persists it before anything is sent). A photo's
@@ -16,17 +17,12 @@ export async function addLocalRecord(opts: {
 }): Promise<LocalRecord> {
   const { records, blobs } = idbStores();
   if (opts.blob) await set(opts.record.id, opts.blob, blobs);
-  const item: LocalRecord = {
-    record: opts.record,
+  const item = newLocalRecord({
     eventId: opts.eventId,
-    state: "queued",
-    attempts: 0,
-    nextAttemptAt: 0,
-    lastError: null,
-    createdAt: opts.now,
-    sentAt: null,
-    blob: opts.blob ? "waiting" : "none",
-  };
+    record: opts.record,
+    hasBlob: Boolean(opts.blob),
+    now: opts.now,
+  });
   await set(opts.record.id, item, records);
   announceChange({ type: "records", eventId: opts.eventId });
   return item;
