@@ -123,6 +123,10 @@ export async function benchEventSize(opts: {
         cookie,
         since: full.body.recordsCursor,
         ifNoneMatch: full.etag,
+        phoneHas: {
+          entriesTag: full.body.entriesTag,
+          ruleSetVersionId: full.body.ruleSetVersionId,
+        },
       });
       if (partial.status !== 200)
         throw new Error(`P7: the ${e.name} event's partial pack answered ${partial.status}`);
@@ -207,7 +211,7 @@ export async function benchEventSize(opts: {
       note: mid ? `demo ${kb(pick(mid.demo))}, ${n} entries ${kb(pick(mid.large))}` : undefined,
     };
   };
-  const partialWords = `GET /api/events/<id>/pack?since=<recordsCursor> with If-None-Match after another phone synced one batch of ${BATCH_SIZE}`;
+  const partialWords = `GET /api/events/<id>/pack?format=2&since=<recordsCursor>&entries=<entriesTag>&rules=<rule-set version> with If-None-Match (as the tech line asks) after another phone synced one batch of ${BATCH_SIZE}`;
   return [
     makeFigure(
       {

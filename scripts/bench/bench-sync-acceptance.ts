@@ -116,7 +116,7 @@ export async function benchSyncAcceptance(opts: {
       label: "sync/raw insert",
       unit: "ratio",
       target: { op: "≥", value: 0.5 },
-      definition: `records/s through POST /api/events/<id>/sync (signed in as a demo scrutineer; ${BATCH_SIZE} records a batch over 2 cars; ${sizes.syncBatches} batches, ${sizes.syncConcurrency} in flight, autocannon; the worker paused meanwhile, so this is the request path alone) ÷ records/s of one multi-row INSERT per batch of the same rows into the same records table through mysql2 (same batch size and concurrency)`,
+      definition: `records/s through POST /api/events/<id>/sync (signed in as a demo scrutineer; ${BATCH_SIZE} records a batch over 2 cars; ${sizes.syncBatches} batches, ${sizes.syncConcurrency} in flight through fetch; the worker paused meanwhile, so this is the request path alone) ÷ records/s of one multi-row INSERT per batch of the same rows into the same records table through mysql2 (same batch size and concurrency)`,
     },
     runs,
   );

@@ -12,7 +12,13 @@ export type PackFetch = {
   gzipBytes: number;
   /** Whether the server sent it compressed (Next's `compress`, on by default). */
   compressedByServer: boolean;
-  body: { generatedAt?: string; recordsCursor?: string; records?: unknown[] } | null;
+  body: {
+    generatedAt?: string;
+    recordsCursor?: string;
+    records?: unknown[];
+    entriesTag?: string;
+    ruleSetVersionId?: string;
+  } | null;
 };
 
 /** One request; bounded by a 60 s timeout. */
@@ -22,9 +28,18 @@ export function fetchPack(opts: {
   cookie: string;
   since?: string;
   ifNoneMatch?: string;
+  /** What the phone's stored pack holds (from the whole pack before), sent with a refresh. */
+  phoneHas?: { entriesTag?: string; ruleSetVersionId?: string };
 }): Promise<PackFetch> {
+  // As the tech line asks (lib/offline/fetch-event-pack.ts): format 2, and with a refresh the
+  // entries and rule set it already holds.
   const url = new URL(`/api/events/${opts.eventId}/pack`, opts.appUrl);
+  url.searchParams.set("format", "2");
   if (opts.since) url.searchParams.set("since", opts.since);
+  if (opts.since && opts.phoneHas?.entriesTag)
+    url.searchParams.set("entries", opts.phoneHas.entriesTag);
+  if (opts.since && opts.phoneHas?.ruleSetVersionId)
+    url.searchParams.set("rules", opts.phoneHas.ruleSetVersionId);
   const headers: Record<string, string> = { cookie: opts.cookie, "accept-encoding": "gzip" };
   if (opts.ifNoneMatch) headers["if-none-match"] = opts.ifNoneMatch;
   return new Promise((resolve, reject) => {
