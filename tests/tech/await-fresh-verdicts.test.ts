@@ -4,6 +4,7 @@ import { awaitFreshVerdicts } from "@/lib/offline/await-fresh-verdicts";
 import type { EventPack, PackVerdict } from "@/lib/offline/event-pack-schema";
 import { loadEventPack } from "@/lib/offline/load-event-pack";
 import { saveEventPack } from "@/lib/offline/save-event-pack";
+import { testPack } from "./test-pack";
 
 // After a sync the phone looks for the server's new verdicts: the poll against a stand-in for the
 // pack route (ETag, `since`, format 2), with fake timers and fake-indexeddb (npm) as the phone's
@@ -29,35 +30,12 @@ function pack(
   parts: Pick<EventPack, "etag" | "partial" | "verdicts"> &
     Partial<Pick<EventPack, "pendingVerdicts">>,
 ) {
-  return {
-    packFormat: 2 as const,
+  return testPack(eventId, {
+    entryIds: ["a", "b"],
     generatedAt: new Date(Date.now()).toISOString(),
     recordsCursor: new Date(Date.now() - 10_000).toISOString(),
-    event: {
-      id: eventId,
-      name: "Test day",
-      eventDate: "2027-06-05",
-      timeZone: "UTC",
-      unitSystem: "mm" as const,
-      venueName: "Pad",
-    },
-    ruleSet: {},
-    ruleSetVersionId: "v1",
-    entries: ["a", "b"].map((entryId, i) => ({
-      entryId,
-      carNumber: i + 1,
-      declaredClassId: "k1",
-      car: "2001 Test Car",
-      colour: "Blue",
-      drivers: "Driver",
-      declarations: {},
-    })),
-    officials: [],
-    passKeys: [],
-    revokedPassIds: [],
-    records: [],
     ...parts,
-  };
+  });
 }
 
 /**

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import type { EventPack, PackRecord, PackVerdict } from "@/lib/offline/event-pack-schema";
 import { loadEventPack } from "@/lib/offline/load-event-pack";
 import { saveEventPack } from "@/lib/offline/save-event-pack";
+import { testPack } from "./test-pack";
 
 // How the phone keeps its event pack (fake-indexeddb, from npm, plays the phone's IndexedDB). A
 // partial pack carries only what changed since the phone's cursor; merged into what is stored it
@@ -42,36 +43,12 @@ function pack(
   eventId: string,
   parts: Partial<EventPack> & Pick<EventPack, "verdicts" | "records">,
 ): EventPack {
-  return {
-    packFormat: 2,
-    etag: '"e"',
+  return testPack(eventId, {
+    entryIds: ["a", "b", "c"],
     generatedAt: at(0),
     recordsCursor: at(-10),
-    partial: false,
-    event: {
-      id: eventId,
-      name: "Test day",
-      eventDate: "2027-06-05",
-      timeZone: "UTC",
-      unitSystem: "mm",
-      venueName: "Pad",
-    },
-    ruleSet: {},
-    ruleSetVersionId: "v1",
-    entries: ["a", "b", "c"].map((entryId, i) => ({
-      entryId,
-      carNumber: i + 1,
-      declaredClassId: "k1",
-      car: "2001 Test Car",
-      colour: "Blue",
-      drivers: "Driver",
-      declarations: {},
-    })),
-    officials: [],
-    passKeys: [],
-    revokedPassIds: [],
     ...parts,
-  };
+  });
 }
 
 describe("saveEventPack", () => {
