@@ -17,7 +17,7 @@ import {
   venues,
 } from "../db/schema";
 import { demoRuleSet } from "../db/seed/demo-rule-set";
-import type { TechRecord } from "../lib/scrutineer/record-schema";
+import type { TechRecord } from "../lib/scrutineer/records/record-schema";
 import { createTestDatabase } from "../tests/support/test-database";
 
 export type DbReadResult = {

@@ -3,14 +3,14 @@
 // runEngineBench() returns the figures so the database comparison can be added beside it.
 import { pathToFileURL } from "node:url";
 import { demoRuleSet } from "../db/seed/demo-rule-set";
-import type { EquipmentLabel, LabelForm } from "../lib/scrutineer/equipment-label-schema";
-import { evaluateEntry } from "../lib/scrutineer/evaluate-entry";
+import type { Corner, LengthDimension, TechRecord } from "../lib/scrutineer/records/record-schema";
+import type { EquipmentLabel, LabelForm } from "../lib/scrutineer/safety/equipment-label-schema";
+import { evaluateEntry } from "../lib/scrutineer/verdicts/evaluate-entry";
 import {
   type EvaluateEntryInput,
   evaluateEntryInputSchema,
-} from "../lib/scrutineer/evaluate-entry-input-schema";
-import type { Corner, LengthDimension, TechRecord } from "../lib/scrutineer/record-schema";
-import type { VerdictStatus } from "../lib/scrutineer/verdict-schema";
+} from "../lib/scrutineer/verdicts/evaluate-entry-input-schema";
+import type { VerdictStatus } from "../lib/scrutineer/verdicts/verdict-schema";
 
 /** What to build and how often to run it. */
 export type EngineBenchOptions = {

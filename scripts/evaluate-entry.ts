@@ -6,11 +6,11 @@
 import { readFileSync } from "node:fs";
 import { z } from "zod";
 import { demoRuleSet } from "../db/seed/demo-rule-set";
-import { evaluateEntry } from "../lib/scrutineer/evaluate-entry";
+import { evaluateEntry } from "../lib/scrutineer/verdicts/evaluate-entry";
 import {
   type EvaluateEntryInputRaw,
   evaluateEntryInputSchema,
-} from "../lib/scrutineer/evaluate-entry-input-schema";
+} from "../lib/scrutineer/verdicts/evaluate-entry-input-schema";
 
 function example(): EvaluateEntryInputRaw {
   const at = (n: number) => ({

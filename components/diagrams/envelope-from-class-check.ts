@@ -1,8 +1,12 @@
-import type { ClassRules } from "@/lib/scrutineer/class-rules-schema";
-import type { DisplayLengthUnit } from "@/lib/scrutineer/format-length";
-import type { LengthDimension } from "@/lib/scrutineer/record-schema";
-import type { ClassRuleId } from "@/lib/scrutineer/rule-ids";
-import type { ClassCheck, DimensionSummary, RuleResult } from "@/lib/scrutineer/verdict-schema";
+import type { ClassRules } from "@/lib/scrutineer/classes/class-rules-schema";
+import type { LengthDimension } from "@/lib/scrutineer/records/record-schema";
+import type { ClassRuleId } from "@/lib/scrutineer/rule-sets/rule-ids";
+import type { DisplayLengthUnit } from "@/lib/scrutineer/units/format-length";
+import type {
+  ClassCheck,
+  DimensionSummary,
+  RuleResult,
+} from "@/lib/scrutineer/verdicts/verdict-schema";
 import type { ClassEnvelopeProps, EnvelopeCheck } from "./envelope/envelope-types";
 
 /**

@@ -1,5 +1,5 @@
-import { CORNER_LABELS, dimensionLabel } from "@/lib/scrutineer/dimension-labels";
-import type { Corner, Dimension } from "@/lib/scrutineer/record-schema";
+import { CORNER_LABELS, dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
+import type { Corner, Dimension } from "@/lib/scrutineer/records/record-schema";
 
 /** What a reading drawing says in words: its accessible label and its one-line caption. */
 export type ReadingDiagramText = { label: string; caption: string };

@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { Corner, Dimension } from "@/lib/scrutineer/record-schema";
+import type { Corner, Dimension } from "@/lib/scrutineer/records/record-schema";
 import { DiagramFigure } from "./parts/diagram-figure";
 import { readingDiagramText } from "./reading-diagram-text";
 import { BODY_WIDTH_DRAWING_HEIGHT, BodyWidthDrawing } from "./readings/body-width-drawing";

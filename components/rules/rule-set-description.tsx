@@ -1,4 +1,4 @@
-import type { RuleSetDescription } from "@/lib/scrutineer/describe-rule-set";
+import type { RuleSetDescription } from "@/lib/scrutineer/rule-sets/describe-rule-set";
 
 /** The class ladder and the rules around it, in words, one card per class (low → high). */
 export function RuleSetDescriptionView({ description }: { description: RuleSetDescription }) {

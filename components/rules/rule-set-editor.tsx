@@ -2,7 +2,10 @@
 import { type ChangeEvent, useActionState, useState } from "react";
 import type { FieldErrors } from "@/lib/errors";
 import type { RuleSetChangePreview } from "@/lib/rule-sets/preview-rule-set-change";
-import { MAX_RULE_SET_CHARS, type RuleSetIssue } from "@/lib/scrutineer/parse-rule-set-json";
+import {
+  MAX_RULE_SET_CHARS,
+  type RuleSetIssue,
+} from "@/lib/scrutineer/rule-sets/parse-rule-set-json";
 import { FieldError } from "../field-error";
 import { ReEvaluationView } from "./re-evaluation-view";
 

@@ -1,14 +1,14 @@
 "use client";
 import { useEffect, useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
-import type { EquipmentLabel } from "@/lib/scrutineer/equipment-label-schema";
 import {
   type ChecklistPayload,
   RECORD_TEXT_LIMITS,
   type TechRecordOf,
-} from "@/lib/scrutineer/record-schema";
-import type { ChecklistItem } from "@/lib/scrutineer/safety-rules-schema";
-import type { SafetyItemResult } from "@/lib/scrutineer/verdict-schema";
+} from "@/lib/scrutineer/records/record-schema";
+import type { EquipmentLabel } from "@/lib/scrutineer/safety/equipment-label-schema";
+import type { ChecklistItem } from "@/lib/scrutineer/safety/safety-rules-schema";
+import type { SafetyItemResult } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { AnswerButton } from "./answer-button";
 import { CharacterCount } from "./character-count";
 import { checklistItemState } from "./checklist-item-state";

@@ -1,4 +1,4 @@
-import type { SafetyItemResult } from "@/lib/scrutineer/verdict-schema";
+import type { SafetyItemResult } from "@/lib/scrutineer/verdicts/verdict-schema";
 
 /** The three state colours of DESIGN.md, plus plain grey for "not yet" and "not fitted". */
 export type StateTone = "cleared" | "attention" | "stopped" | "waiting" | "neutral";

@@ -1,6 +1,6 @@
 "use client";
-import type { TechRecord, TechRecordOf } from "@/lib/scrutineer/record-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { TechRecord, TechRecordOf } from "@/lib/scrutineer/records/record-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { ChecklistItemForm } from "./checklist-item-form";
 import { useTech } from "./tech-context";
 

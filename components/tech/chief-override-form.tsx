@@ -2,14 +2,14 @@
 import { useState } from "react";
 import { FieldError } from "@/components/field-error";
 import { makeRecord } from "@/lib/offline/make-record";
-import { overrideClassChoices } from "@/lib/scrutineer/override-class-choices";
-import { overrideTargetProblem } from "@/lib/scrutineer/override-target-problem";
+import { overrideClassChoices } from "@/lib/scrutineer/classes/override-class-choices";
+import { overrideTargetProblem } from "@/lib/scrutineer/classes/override-target-problem";
 import {
   type OverridePayload,
   RECORD_TEXT_LIMITS,
   recordSchema,
-} from "@/lib/scrutineer/record-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+} from "@/lib/scrutineer/records/record-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { useTech } from "./tech-context";
 
 type Status = OverridePayload["status"];

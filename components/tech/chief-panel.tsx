@@ -1,6 +1,6 @@
 "use client";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { ChiefOverrideForm } from "./chief-override-form";
 import { ChiefVoidForm } from "./chief-void-form";
 import { useTech } from "./tech-context";

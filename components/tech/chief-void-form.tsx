@@ -6,7 +6,7 @@ import {
   incomingRecordSchema,
   RECORD_TEXT_LIMITS,
   type TechRecord,
-} from "@/lib/scrutineer/record-schema";
+} from "@/lib/scrutineer/records/record-schema";
 import { useTech } from "./tech-context";
 import { voidChoices } from "./void-choices";
 

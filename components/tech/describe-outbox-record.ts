@@ -1,5 +1,5 @@
-import { CORNER_LABELS, DIMENSION_LABELS } from "@/lib/scrutineer/dimension-labels";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import { CORNER_LABELS, DIMENSION_LABELS } from "@/lib/scrutineer/measurement/dimension-labels";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { formatReadingValue } from "./format-reading-value";
 import { sentenceCase } from "./sentence-case";
 

@@ -1,7 +1,7 @@
 "use client";
 import { ClassEnvelope } from "@/components/diagrams/class-envelope";
 import { envelopeFromClassCheck } from "@/components/diagrams/envelope-from-class-check";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { useTech } from "./tech-context";
 
 /**

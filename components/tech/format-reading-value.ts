@@ -1,7 +1,7 @@
-import { convertMass } from "@/lib/scrutineer/convert-mass";
-import { formatDecimal } from "@/lib/scrutineer/format-decimal";
-import { formatLength } from "@/lib/scrutineer/format-length";
-import type { Dimension } from "@/lib/scrutineer/record-schema";
+import type { Dimension } from "@/lib/scrutineer/records/record-schema";
+import { convertMass } from "@/lib/scrutineer/units/convert-mass";
+import { formatDecimal } from "@/lib/scrutineer/units/format-decimal";
+import { formatLength } from "@/lib/scrutineer/units/format-length";
 
 /** A reading's value in the event's units ("1380.0 mm", "54.33 in", "312.0 kg", "98.5 dB(A)"). */
 export function formatReadingValue(

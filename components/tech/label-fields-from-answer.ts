@@ -1,4 +1,4 @@
-import type { ChecklistPayload } from "@/lib/scrutineer/record-schema";
+import type { ChecklistPayload } from "@/lib/scrutineer/records/record-schema";
 
 /** What the checklist item's label fields hold: the standard and the label as typed. */
 export type LabelFields = { standardId: string; year: string; month: string; date: string };

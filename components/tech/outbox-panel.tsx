@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { isPending, type LocalRecord } from "@/lib/offline/local-record";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { describeOutboxRecord } from "./describe-outbox-record";
 
 const stateWords: Record<LocalRecord["state"], string> = {

@@ -1,7 +1,7 @@
 "use client";
 import { useEffect, useState } from "react";
 import { loadPhotoBlob } from "@/lib/offline/load-photo-blob";
-import type { TechRecordOf } from "@/lib/scrutineer/record-schema";
+import type { TechRecordOf } from "@/lib/scrutineer/records/record-schema";
 import { useTech } from "./tech-context";
 import { VoidOwnRecord } from "./void-own-record";
 

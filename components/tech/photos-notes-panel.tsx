@@ -1,8 +1,8 @@
 "use client";
 import { useMemo, useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
-import { RECORD_TEXT_LIMITS, type TechRecord } from "@/lib/scrutineer/record-schema";
-import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
+import { RECORD_TEXT_LIMITS, type TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { resolveVoids } from "@/lib/scrutineer/records/resolve-voids";
 import { photoStorageKey } from "@/lib/tech/photo-storage-key";
 import { CharacterCount } from "./character-count";
 import { PhotoThumb } from "./photo-thumb";

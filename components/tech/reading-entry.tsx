@@ -3,18 +3,18 @@ import { useRef, useState } from "react";
 import { Caution } from "@/components/caution";
 import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
 import { makeRecord } from "@/lib/offline/make-record";
-import { convertMass } from "@/lib/scrutineer/convert-mass";
-import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
-import { implausibleReading } from "@/lib/scrutineer/implausible-reading";
-import { parseLength } from "@/lib/scrutineer/parse-length";
-import type { ReadingContext } from "@/lib/scrutineer/reading-context";
+import { dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
+import { implausibleReading } from "@/lib/scrutineer/measurement/implausible-reading";
+import type { ReadingContext } from "@/lib/scrutineer/measurement/reading-context";
 import {
   type Corner,
   type Dimension,
   type ReadingPayload,
   SIGNED_DIMENSIONS,
   type TechRecordOf,
-} from "@/lib/scrutineer/record-schema";
+} from "@/lib/scrutineer/records/record-schema";
+import { convertMass } from "@/lib/scrutineer/units/convert-mass";
+import { parseLength } from "@/lib/scrutineer/units/parse-length";
 import {
   compareWithOwnReadings,
   type OwnReadingMismatch,

@@ -1,6 +1,6 @@
-import { convertLength } from "@/lib/scrutineer/convert-length";
-import { convertMass } from "@/lib/scrutineer/convert-mass";
-import type { Dimension } from "@/lib/scrutineer/record-schema";
+import type { Dimension } from "@/lib/scrutineer/records/record-schema";
+import { convertLength } from "@/lib/scrutineer/units/convert-length";
+import { convertMass } from "@/lib/scrutineer/units/convert-mass";
 
 /** A plausible size for each reading on a club car (a hint, never a limit or a check value). */
 const EXAMPLE_MM: Record<Exclude<Dimension, "cornerWeightKg" | "noiseDbA">, number> = {

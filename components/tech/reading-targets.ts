@@ -1,4 +1,4 @@
-import type { Corner, Dimension } from "@/lib/scrutineer/record-schema";
+import type { Corner, Dimension } from "@/lib/scrutineer/records/record-schema";
 
 export type ReadingTarget = {
   key: string;

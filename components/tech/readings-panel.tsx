@@ -1,10 +1,10 @@
 "use client";
 import { useMemo, useState } from "react";
-import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
-import { readingContext } from "@/lib/scrutineer/reading-context";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import { dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
+import { readingContext } from "@/lib/scrutineer/measurement/reading-context";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { resolveVoids } from "@/lib/scrutineer/records/resolve-voids";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { formatReadingValue } from "./format-reading-value";
 import { ReadingEntry } from "./reading-entry";
 import { readingTargets } from "./reading-targets";

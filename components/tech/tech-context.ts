@@ -2,8 +2,8 @@
 import { createContext, useContext } from "react";
 import type { LocalRecord } from "@/lib/offline/local-record";
 import type { StoredPack } from "@/lib/offline/save-event-pack";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSet } from "@/lib/scrutineer/rule-set-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSet } from "@/lib/scrutineer/rule-sets/rule-set-schema";
 
 /** What every part of the tech line needs: who is recording, on which phone, with what pack. */
 export type TechContextValue = {

@@ -9,7 +9,7 @@ import { mergeEntryRecords } from "@/lib/offline/merge-entry-records";
 import { prepareForOffline } from "@/lib/offline/prepare-for-offline";
 import { previewVerdict } from "@/lib/offline/preview-verdict";
 import { requestBackgroundSync } from "@/lib/offline/request-background-sync";
-import { recordSchema, type TechRecord } from "@/lib/scrutineer/record-schema";
+import { recordSchema, type TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { CarCard } from "./car-card";
 import { FindCar } from "./find-car";
 import { OutboxPanel } from "./outbox-panel";

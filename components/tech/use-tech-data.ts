@@ -6,7 +6,7 @@ import { listLocalRecords } from "@/lib/offline/list-local-records";
 import { loadEventPack } from "@/lib/offline/load-event-pack";
 import type { LocalRecord } from "@/lib/offline/local-record";
 import type { StoredPack } from "@/lib/offline/save-event-pack";
-import { type RuleSet, ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import { type RuleSet, ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
 
 export type TechData = {
   loading: boolean;

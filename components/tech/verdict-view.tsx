@@ -1,7 +1,7 @@
 "use client";
 import { VerdictBadge } from "@/components/verdict-badge";
-import type { RuleSet } from "@/lib/scrutineer/rule-set-schema";
-import type { RuleResult, Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { RuleSet } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import type { RuleResult, Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { checklistItemState, type StateTone } from "./checklist-item-state";
 import { StateMark } from "./state-mark";
 

@@ -1,6 +1,6 @@
-import { DIMENSION_LABELS, dimensionLabel } from "@/lib/scrutineer/dimension-labels";
-import type { Dimension, TechRecord, TechRecordOf } from "@/lib/scrutineer/record-schema";
-import { voidedRecordIds } from "@/lib/scrutineer/voided-record-ids";
+import { DIMENSION_LABELS, dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
+import type { Dimension, TechRecord, TechRecordOf } from "@/lib/scrutineer/records/record-schema";
+import { voidedRecordIds } from "@/lib/scrutineer/records/voided-record-ids";
 import { formatClockTime } from "@/lib/tech/format-clock-time";
 import { formatReadingValue } from "./format-reading-value";
 import { sentenceCase } from "./sentence-case";

@@ -1,8 +1,8 @@
 "use client";
 import { useState } from "react";
 import { makeRecord } from "@/lib/offline/make-record";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { RECORD_TEXT_LIMITS } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { RECORD_TEXT_LIMITS } from "@/lib/scrutineer/records/record-schema";
 import { useTech } from "./tech-context";
 
 /**

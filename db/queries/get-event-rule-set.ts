@@ -1,6 +1,6 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import { type RuleSet, ruleSetSchema } from "../../lib/scrutineer/rule-set-schema";
+import { type RuleSet, ruleSetSchema } from "../../lib/scrutineer/rule-sets/rule-set-schema";
 import { getDb } from "../client";
 import { events, ruleSetVersions } from "../schema";
 

@@ -1,7 +1,7 @@
 import "server-only";
 import { inArray, sql } from "drizzle-orm";
-import type { TechRecord } from "../../lib/scrutineer/record-schema";
-import { stableStringify } from "../../lib/scrutineer/stable-stringify";
+import type { TechRecord } from "../../lib/scrutineer/records/record-schema";
+import { stableStringify } from "../../lib/scrutineer/records/stable-stringify";
 import type { Tx } from "../run-transaction";
 import { records } from "../schema";
 

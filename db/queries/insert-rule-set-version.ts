@@ -3,7 +3,7 @@ import { eq, max } from "drizzle-orm";
 import { v7 as uuidv7 } from "uuid";
 import { clock } from "../../lib/clock";
 import { AppError } from "../../lib/errors";
-import type { RuleSet } from "../../lib/scrutineer/rule-set-schema";
+import type { RuleSet } from "../../lib/scrutineer/rule-sets/rule-set-schema";
 import { getDb } from "../client";
 import { auditLog, events, ruleSets, ruleSetVersions } from "../schema";
 

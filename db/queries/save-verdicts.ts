@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, inArray, sql } from "drizzle-orm";
-import type { VerdictStatus } from "../../lib/scrutineer/verdict-schema";
+import type { VerdictStatus } from "../../lib/scrutineer/verdicts/verdict-schema";
 import type { Tx } from "../run-transaction";
 import { verdicts } from "../schema";
 

@@ -2,7 +2,7 @@ import {
   type RuleSet,
   type RuleSetInput,
   ruleSetSchema,
-} from "../../lib/scrutineer/rule-set-schema";
+} from "../../lib/scrutineer/rule-sets/rule-set-schema";
 
 /**
  * Invented demo data for the demo event: the made-up Brackenmoor club's time-attack ladder,

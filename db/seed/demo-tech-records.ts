@@ -2,10 +2,10 @@
 // scrutineers, a few of them over their class, one with an expired harness, one too close to call
 // and one whose readings disagree — so every screen has something to show.
 import { v7 as uuidv7 } from "uuid";
-import type { ClassRules } from "../../lib/scrutineer/class-rules-schema";
-import type { EntryDeclarationsInput } from "../../lib/scrutineer/entry-declarations-schema";
-import type { LengthDimension, TechRecord } from "../../lib/scrutineer/record-schema";
-import type { RuleSet } from "../../lib/scrutineer/rule-set-schema";
+import type { ClassRules } from "../../lib/scrutineer/classes/class-rules-schema";
+import type { EntryDeclarationsInput } from "../../lib/scrutineer/classes/entry-declarations-schema";
+import type { LengthDimension, TechRecord } from "../../lib/scrutineer/records/record-schema";
+import type { RuleSet } from "../../lib/scrutineer/rule-sets/rule-set-schema";
 import { createPrng } from "./prng";
 
 export type DemoTwist = "none" | "over-height" | "expired-harness" | "too-close" | "disagree";

@@ -3,10 +3,10 @@
 import { v7 as uuidv7 } from "uuid";
 import { normalizeEmail } from "../../lib/auth/normalize-email";
 import { modeNow } from "../../lib/env";
-import { displayUnits } from "../../lib/scrutineer/display-units";
-import type { EntryDeclarationsInput } from "../../lib/scrutineer/entry-declarations-schema";
-import { entryDeclarationsSchema } from "../../lib/scrutineer/entry-declarations-schema";
-import { evaluateEntry } from "../../lib/scrutineer/evaluate-entry";
+import type { EntryDeclarationsInput } from "../../lib/scrutineer/classes/entry-declarations-schema";
+import { entryDeclarationsSchema } from "../../lib/scrutineer/classes/entry-declarations-schema";
+import { displayUnits } from "../../lib/scrutineer/units/display-units";
+import { evaluateEntry } from "../../lib/scrutineer/verdicts/evaluate-entry";
 import { needsChiefScrutineer } from "../../lib/tech/needs-chief-scrutineer";
 import type { Db } from "../client";
 import {

@@ -1,4 +1,4 @@
-import { type Verdict, verdictSchema } from "../scrutineer/verdict-schema";
+import { type Verdict, verdictSchema } from "../scrutineer/verdicts/verdict-schema";
 
 // Entries already reported by this process, so a phone fetching its pack every 15 s does not
 // repeat the same line; bounded, and forgotten when full.

@@ -1,5 +1,5 @@
 import { set } from "idb-keyval";
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 import { announceChange } from "./announce-change";
 import { idbStores } from "./idb-stores";
 import type { LocalRecord } from "./local-record";

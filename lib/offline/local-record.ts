@@ -1,4 +1,4 @@
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 
 /**
  * Where one of this phone's records stands:

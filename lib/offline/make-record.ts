@@ -1,5 +1,5 @@
 import { v7 as uuidv7 } from "uuid";
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 
 type Kind = TechRecord["kind"];
 

@@ -1,4 +1,4 @@
-import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
+import { recordSchema, type TechRecord } from "../scrutineer/records/record-schema";
 import type { PackRecord } from "./event-pack-schema";
 import type { LocalRecord } from "./local-record";
 

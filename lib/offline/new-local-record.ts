@@ -1,4 +1,4 @@
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 import type { LocalRecord } from "./local-record";
 
 /**

@@ -1,9 +1,9 @@
-import { displayUnits } from "../scrutineer/display-units";
-import { storedEntryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
-import { evaluateEntry } from "../scrutineer/evaluate-entry";
-import type { TechRecord } from "../scrutineer/record-schema";
-import type { RuleSet } from "../scrutineer/rule-set-schema";
-import type { Verdict } from "../scrutineer/verdict-schema";
+import { storedEntryDeclarationsSchema } from "../scrutineer/classes/entry-declarations-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
+import type { RuleSet } from "../scrutineer/rule-sets/rule-set-schema";
+import { displayUnits } from "../scrutineer/units/display-units";
+import { evaluateEntry } from "../scrutineer/verdicts/evaluate-entry";
+import type { Verdict } from "../scrutineer/verdicts/verdict-schema";
 
 /**
  * The phone's preview of a verdict: the very function the server runs, on the records this phone

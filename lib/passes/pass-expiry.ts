@@ -1,4 +1,4 @@
-import { isoDateParts } from "../scrutineer/iso-date-parts";
+import { isoDateParts } from "../scrutineer/calendar/iso-date-parts";
 
 /** How long a pass stays good after the event's local date has ended, in seconds: covers a
  *  late finish and a phone clock that runs a little fast. */

@@ -3,9 +3,9 @@ import { countDeclaredClasses } from "../../db/queries/count-declared-classes";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { listRuleSetVersions } from "../../db/queries/list-rule-set-versions";
 import { AppError } from "../errors";
-import { checkRuleSetSuccessor } from "../scrutineer/check-rule-set-successor";
-import { parseRuleSetJson, type RuleSetIssue } from "../scrutineer/parse-rule-set-json";
-import type { RuleSet } from "../scrutineer/rule-set-schema";
+import { checkRuleSetSuccessor } from "../scrutineer/rule-sets/check-rule-set-successor";
+import { parseRuleSetJson, type RuleSetIssue } from "../scrutineer/rule-sets/parse-rule-set-json";
+import type { RuleSet } from "../scrutineer/rule-sets/rule-set-schema";
 
 /** A draft that passed every check, or the problems with their places. */
 export type RuleSetDraftCheck =

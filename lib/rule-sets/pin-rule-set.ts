@@ -4,7 +4,7 @@ import { getRuleSetVersion } from "../../db/queries/get-rule-set-version";
 import { pinRuleSetVersion } from "../../db/queries/pin-rule-set-version";
 import { clock } from "../clock";
 import { AppError } from "../errors";
-import { ruleSetSchema } from "../scrutineer/rule-set-schema";
+import { ruleSetSchema } from "../scrutineer/rule-sets/rule-set-schema";
 import { recomputeVerdicts } from "../tech/recompute-verdicts";
 import { verdictMoved } from "../tech/verdict-moved";
 

@@ -2,8 +2,8 @@ import "server-only";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { listEventEntries } from "../../db/queries/list-event-entries";
 import { AppError } from "../errors";
-import { type ReEvaluation, reEvaluateEntries } from "../scrutineer/re-evaluate-entries";
-import type { RuleSet } from "../scrutineer/rule-set-schema";
+import type { RuleSet } from "../scrutineer/rule-sets/rule-set-schema";
+import { type ReEvaluation, reEvaluateEntries } from "../scrutineer/verdicts/re-evaluate-entries";
 import { loadEvaluationEntries } from "../tech/load-evaluation-entries";
 
 /** A re-evaluation with each changed entry's car number, for the organizer's page. */

@@ -1,4 +1,4 @@
-import type { VerdictFlag, VerdictStatus } from "../scrutineer/verdict-schema";
+import type { VerdictFlag, VerdictStatus } from "../scrutineer/verdicts/verdict-schema";
 
 /**
  * Why a car waits for the chief scrutineer, in words a person can act on, most pressing first:

@@ -1,5 +1,5 @@
-import { findDisagreements } from "../scrutineer/find-disagreements";
-import type { ReadingPayload, TechRecordOf } from "../scrutineer/record-schema";
+import { findDisagreements } from "../scrutineer/measurement/find-disagreements";
+import type { ReadingPayload, TechRecordOf } from "../scrutineer/records/record-schema";
 
 /** A new reading that does not agree with the scrutineer's own earlier ones. */
 export type OwnReadingMismatch = {

@@ -2,10 +2,10 @@ import "server-only";
 import type { EventRuleContext } from "../../db/queries/get-event-rule-set";
 import { listEntriesForEvaluation } from "../../db/queries/list-entries-for-evaluation";
 import { listEntryRecords } from "../../db/queries/list-entry-records";
-import { displayUnits } from "../scrutineer/display-units";
-import { storedEntryDeclarationsSchema } from "../scrutineer/entry-declarations-schema";
-import type { ReEvaluationEntry } from "../scrutineer/re-evaluate-entries";
-import type { TechRecord } from "../scrutineer/record-schema";
+import { storedEntryDeclarationsSchema } from "../scrutineer/classes/entry-declarations-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
+import { displayUnits } from "../scrutineer/units/display-units";
+import type { ReEvaluationEntry } from "../scrutineer/verdicts/re-evaluate-entries";
 import { readStoredRecord } from "./read-stored-record";
 
 /**

@@ -1,4 +1,4 @@
-import type { Verdict } from "../scrutineer/verdict-schema";
+import type { Verdict } from "../scrutineer/verdicts/verdict-schema";
 
 /**
  * Whether a verdict waits for the chief scrutineer: readings that disagree beyond their combined

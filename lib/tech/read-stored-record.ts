@@ -1,4 +1,4 @@
-import { recordSchema, type TechRecord } from "../scrutineer/record-schema";
+import { recordSchema, type TechRecord } from "../scrutineer/records/record-schema";
 
 // Records are never updated once stored, so a record read through the schema stays read: a car's
 // verdict is re-derived after every batch from all its records, and re-checking the same rows

@@ -1,5 +1,5 @@
 import type { Permission } from "../auth/permissions";
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 
 /** The permission a person needs to make a record of each kind. */
 export const recordPermission: Record<TechRecord["kind"], Permission> = {

@@ -1,6 +1,6 @@
 import { can } from "../auth/permissions";
 import type { Role } from "../auth/roles";
-import type { TechRecord } from "../scrutineer/record-schema";
+import type { TechRecord } from "../scrutineer/records/record-schema";
 import { recordPermission } from "./record-permission";
 
 /** What the person may not do, in words, for each kind of record. */
@@ -18,7 +18,7 @@ const cannot: Record<TechRecord["kind"], string> = {
  * with `records.void` (the chief scrutineer voids anyone's record), or with `readings.write` when
  * the record it voids is the official's own and of the same car: a scrutineer can take back a
  * typo, never another official's reading. Only `records.void` voids a void: a void of a void
- * undoes the first (the one void rule, `lib/scrutineer/resolve-voids.ts`), which is the chief
+ * undoes the first (the one void rule, `lib/scrutineer/records/resolve-voids.ts`), which is the chief
  * scrutineer's call, and chains of voids are how a hostile phone would load the engine.
  * `target` is the voided record's kind, author and entry as the server knows them (stored, or
  * earlier in the same batch), or null when it is unknown.

@@ -1,5 +1,5 @@
 import type { PackVerdict } from "../offline/event-pack-schema";
-import type { Verdict } from "../scrutineer/verdict-schema";
+import type { Verdict } from "../scrutineer/verdicts/verdict-schema";
 import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 
 /** The parts of a stored verdict the short form reads (older stored verdicts lack some). */

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import type { NewJob } from "../../db/queries/jobs/enqueue-jobs";
 import { SEND_MAIL, type SendMailPayload } from "../jobs/job-kinds";
 import { composeVerdictMail } from "../mail/compose-verdict-mail";
-import type { RuleSet } from "../scrutineer/rule-set-schema";
+import type { RuleSet } from "../scrutineer/rule-sets/rule-set-schema";
 import type { VerdictChange } from "./recompute-verdicts";
 import { verdictMoved } from "./verdict-moved";
 

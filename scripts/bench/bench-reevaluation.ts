@@ -1,6 +1,6 @@
 // P3: re-evaluating every entry with the engine ÷ reading their records from MariaDB in one
 // query (the engine bench and its database half, scripts/bench-engine.ts and bench-db-read.ts).
-import { evaluateEntryInputSchema } from "../../lib/scrutineer/evaluate-entry-input-schema";
+import { evaluateEntryInputSchema } from "../../lib/scrutineer/verdicts/evaluate-entry-input-schema";
 import { measureDbRead } from "../bench-db-read";
 import { buildBenchEntries, runEngineBench } from "../bench-engine";
 import type { BenchSizes } from "./bench-options";

@@ -16,13 +16,13 @@ import {
 import { demoRuleSet } from "../../db/seed/demo-rule-set";
 import { demoTechRecords } from "../../db/seed/demo-tech-records";
 import { createPrng } from "../../db/seed/prng";
-import { displayUnits } from "../../lib/scrutineer/display-units";
 import {
   type EntryDeclarationsInput,
   entryDeclarationsSchema,
-} from "../../lib/scrutineer/entry-declarations-schema";
-import { evaluateEntry } from "../../lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "../../lib/scrutineer/record-schema";
+} from "../../lib/scrutineer/classes/entry-declarations-schema";
+import type { TechRecord } from "../../lib/scrutineer/records/record-schema";
+import { displayUnits } from "../../lib/scrutineer/units/display-units";
+import { evaluateEntry } from "../../lib/scrutineer/verdicts/evaluate-entry";
 import { needsChiefScrutineer } from "../../lib/tech/needs-chief-scrutineer";
 
 export type LargeEvent = { eventId: string; entryIds: string[]; records: number };

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { ClassEnvelope } from "@/components/diagrams/class-envelope";
 import { envelopeFromClassCheck } from "@/components/diagrams/envelope-from-class-check";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import type { LengthDimension, TechRecord } from "@/lib/scrutineer/record-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { LengthDimension, TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import { evaluateEntryInputSchema } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { partByTestId, render, textOf } from "./render-markup";
 
 // Source: Motorsport UK NCR 2026 Ch.14 App.4 — wing top ≤ 200 mm above the roof's highest point

@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
-import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
 import {
   CORNERS,
   type Corner,
   type Dimension,
   LENGTH_DIMENSIONS,
-} from "@/lib/scrutineer/record-schema";
+} from "@/lib/scrutineer/records/record-schema";
 import { attributeValues, render } from "./render-markup";
 
 const EVERY_DIMENSION: Dimension[] = [...LENGTH_DIMENSIONS, "cornerWeightKg", "noiseDbA"];

@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { parseStoredVerdict } from "@/lib/entries/parse-stored-verdict";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { clubRuleSet, input, lengthReading } from "../scrutineer/fixtures";
 
 // Test values, not trade facts: one reading is enough to make a stored verdict to read back.

@@ -8,7 +8,7 @@ import { idbStores } from "@/lib/offline/idb-stores";
 import { listLocalRecords } from "@/lib/offline/list-local-records";
 import { requeueSignedOutRecords } from "@/lib/offline/requeue-signed-out-records";
 import { resetOutboxBackoff } from "@/lib/offline/reset-outbox-backoff";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { listMail, type MailboxMessage } from "../support/mailbox";

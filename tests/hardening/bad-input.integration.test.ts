@@ -10,7 +10,7 @@ import { v7 as uuidv7 } from "uuid";
 import { afterEach, beforeAll, beforeEach, describe, expect, inject, it } from "vitest";
 import { emailSignInSchema, passwordSignInSchema } from "@/lib/auth/sign-in-schema";
 import { carInputSchema } from "@/lib/cars/car-schema";
-import { incomingRecordSchema } from "@/lib/scrutineer/record-schema";
+import { incomingRecordSchema } from "@/lib/scrutineer/records/record-schema";
 import { syncRequestSchema } from "@/lib/tech/sync-schema";
 import { callServerAction, listServerActions } from "../support/call-server-action";
 import { countAllRows } from "../support/count-all-rows";

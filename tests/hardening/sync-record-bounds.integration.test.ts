@@ -5,7 +5,7 @@
 // its own, with words; the rest of the batch is stored; nothing answers 500.
 import { v7 as uuidv7 } from "uuid";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { MAX_VOIDS_PER_ENTRY } from "@/lib/scrutineer/max-voids-per-entry";
+import { MAX_VOIDS_PER_ENTRY } from "@/lib/scrutineer/records/max-voids-per-entry";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { postSync } from "../support/post-sync";

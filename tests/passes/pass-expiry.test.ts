@@ -4,7 +4,7 @@ import {
   endOfLocalDateMs,
   passValidityWindow,
 } from "@/lib/passes/pass-expiry";
-import { localDateInZone } from "@/lib/scrutineer/local-date-in-zone";
+import { localDateInZone } from "@/lib/scrutineer/calendar/local-date-in-zone";
 
 const iso = (ms: number) => new Date(ms).toISOString();
 const hours = (ms: number) => ms / 3_600_000;

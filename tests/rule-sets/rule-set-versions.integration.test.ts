@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import type { RuleSet } from "@/lib/scrutineer/rule-set-schema";
-import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { RuleSet } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { queryTestDb } from "../support/query-test-db";

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import { wingSpanFromPartsMm } from "@/lib/scrutineer/wing-span-from-parts";
+import { wingSpanFromPartsMm } from "@/lib/scrutineer/aero/wing-span-from-parts";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { clubRuleSet, input, lengthReading } from "./fixtures";
 
 const IN = 25.4; // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import { VERDICT_NOTICE } from "@/lib/scrutineer/verdict-notice";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import { VERDICT_NOTICE } from "@/lib/scrutineer/verdicts/verdict-notice";
 import {
   byOfficial,
   clubRuleSet,

@@ -1,9 +1,13 @@
 import fc from "fast-check";
-import type { EntryDeclarationsInput } from "@/lib/scrutineer/entry-declarations-schema";
-import type { EvaluateEntryInput } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import type { LengthDimension, ReadingPayload, TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
+import type { EntryDeclarationsInput } from "@/lib/scrutineer/classes/entry-declarations-schema";
+import type {
+  LengthDimension,
+  ReadingPayload,
+  TechRecord,
+} from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import type { EvaluateEntryInput } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
+import { evaluateEntryInputSchema } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
 
 /** A deterministic, well-formed UUID v7 for test record n (time-ordered by n). */
 export function uuid7(n: number): string {

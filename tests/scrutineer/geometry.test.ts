@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { deriveAeroGeometry } from "@/lib/scrutineer/derive-aero-geometry";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
-import { summariseDimensions } from "@/lib/scrutineer/summarise-dimensions";
+import { deriveAeroGeometry } from "@/lib/scrutineer/aero/derive-aero-geometry";
+import { summariseDimensions } from "@/lib/scrutineer/measurement/summarise-dimensions";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { clubRuleSet, input, lengthReading } from "./fixtures";
 
 const IN = 25.4; // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly

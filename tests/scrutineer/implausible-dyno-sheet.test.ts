@@ -3,11 +3,11 @@ import { describe, expect, it } from "vitest";
 import {
   type EntryDeclarationsInput,
   entryDeclarationsSchema,
-} from "@/lib/scrutineer/entry-declarations-schema";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { EvaluateEntryInput } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import type { Corner, TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
+} from "@/lib/scrutineer/classes/entry-declarations-schema";
+import type { Corner, TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import type { EvaluateEntryInput } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
 import { clubRuleSet, input, reading } from "./fixtures";
 
 // Issue 8, item 13: a dyno sheet that cannot be true is refused (at the schema, and by the engine

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { demoRuleSet } from "@/db/seed/demo-rule-set";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import { implausibleReading } from "@/lib/scrutineer/implausible-reading";
-import { readingContext } from "@/lib/scrutineer/reading-context";
-import type { ReadingPayload } from "@/lib/scrutineer/record-schema";
-import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import { implausibleReading } from "@/lib/scrutineer/measurement/implausible-reading";
+import { readingContext } from "@/lib/scrutineer/measurement/reading-context";
+import type { ReadingPayload } from "@/lib/scrutineer/records/record-schema";
+import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { chiefAttention } from "@/lib/tech/chief-attention";
 import { needsChiefScrutineer } from "@/lib/tech/needs-chief-scrutineer";
 import { clubRuleSet, input, lengthReading, TAPE } from "./fixtures";

@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import { overrideClassChoices } from "@/lib/scrutineer/override-class-choices";
-import { overrideTargetProblem } from "@/lib/scrutineer/override-target-problem";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
+import { overrideClassChoices } from "@/lib/scrutineer/classes/override-class-choices";
+import { overrideTargetProblem } from "@/lib/scrutineer/classes/override-target-problem";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { clubRuleSet, input, lengthReading, override } from "./fixtures";
 
 // A ladder of four classes, low → high (invented names; the order is what matters).

@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { correctedPowerKw } from "@/lib/scrutineer/corrected-power-kw";
-import { dynoCorrectionFactor } from "@/lib/scrutineer/dyno-correction-factor";
 import {
   dynoSheetSchema,
   type EntryDeclarationsInput,
-} from "@/lib/scrutineer/entry-declarations-schema";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { Corner, TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSet, RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
+} from "@/lib/scrutineer/classes/entry-declarations-schema";
+import { correctedPowerKw } from "@/lib/scrutineer/power-to-weight/corrected-power-kw";
+import { dynoCorrectionFactor } from "@/lib/scrutineer/power-to-weight/dyno-correction-factor";
+import type { Corner, TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSet, RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { clubRuleSet, input, reading } from "./fixtures";
 
 const LB = 0.45359237; // Source: NIST SP 811 App. B.8 — 1 lb = 0.45359237 kg exactly

@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import {
   checklist,
   clubRuleSet,

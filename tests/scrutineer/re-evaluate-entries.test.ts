@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { diffRuleSets } from "@/lib/scrutineer/diff-rule-sets";
-import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import { reEvaluateEntries } from "@/lib/scrutineer/re-evaluate-entries";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { diffRuleSets } from "@/lib/scrutineer/rule-sets/diff-rule-sets";
+import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntryInputSchema } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
+import { reEvaluateEntries } from "@/lib/scrutineer/verdicts/re-evaluate-entries";
 import { clubRuleSet, lengthReading } from "./fixtures";
 
 const IN = 25.4; // Source: NIST SP 811 App. B.8 — 1 in = 25.4 mm exactly

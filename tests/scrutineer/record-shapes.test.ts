@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { incomingRecordSchema, recordSchema } from "@/lib/scrutineer/record-schema";
+import { incomingRecordSchema, recordSchema } from "@/lib/scrutineer/records/record-schema";
 
 // A record as the phone makes it (test data for the shape, not a trade value).
 const record = {

@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import { evaluateEntryInputSchema } from "@/lib/scrutineer/evaluate-entry-input-schema";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import { verdictSchema } from "@/lib/scrutineer/verdict-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import { evaluateEntryInputSchema } from "@/lib/scrutineer/verdicts/evaluate-entry-input-schema";
+import { verdictSchema } from "@/lib/scrutineer/verdicts/verdict-schema";
 import {
   byOfficial,
   clubRuleSet,

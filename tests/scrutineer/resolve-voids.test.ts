@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { resolveRecords } from "@/lib/scrutineer/resolve-records";
-import { resolveVoids } from "@/lib/scrutineer/resolve-voids";
-import { voidedRecordIds } from "@/lib/scrutineer/voided-record-ids";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { resolveRecords } from "@/lib/scrutineer/records/resolve-records";
+import { resolveVoids } from "@/lib/scrutineer/records/resolve-voids";
+import { voidedRecordIds } from "@/lib/scrutineer/records/voided-record-ids";
 import { lengthReading, note, voidRecord } from "./fixtures";
 
 // The void rule is our own product rule (no outside source): records are immutable, a void

@@ -1,9 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { checkRuleSetSuccessor } from "@/lib/scrutineer/check-rule-set-successor";
-import { describeExpiryPolicy, describeRuleSet } from "@/lib/scrutineer/describe-rule-set";
-import { displayUnits } from "@/lib/scrutineer/display-units";
-import { parseRuleSetJson } from "@/lib/scrutineer/parse-rule-set-json";
-import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import { checkRuleSetSuccessor } from "@/lib/scrutineer/rule-sets/check-rule-set-successor";
+import {
+  describeExpiryPolicy,
+  describeRuleSet,
+} from "@/lib/scrutineer/rule-sets/describe-rule-set";
+import { parseRuleSetJson } from "@/lib/scrutineer/rule-sets/parse-rule-set-json";
+import { type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { displayUnits } from "@/lib/scrutineer/units/display-units";
 import { clubRuleSet } from "./fixtures";
 
 /**

@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { checkEquipmentValidity } from "@/lib/scrutineer/check-equipment-validity";
-import type { EquipmentLabel } from "@/lib/scrutineer/equipment-label-schema";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import type { RuleSetInput } from "@/lib/scrutineer/rule-set-schema";
-import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
-import type { SafetyStandard } from "@/lib/scrutineer/safety-rules-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import type { RuleSetInput } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { checkEquipmentValidity } from "@/lib/scrutineer/safety/check-equipment-validity";
+import type { EquipmentLabel } from "@/lib/scrutineer/safety/equipment-label-schema";
+import type { SafetyStandard } from "@/lib/scrutineer/safety/safety-rules-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { checklist, clubRuleSet, input, lengthReading } from "./fixtures";
 
 const std = (s: Omit<SafetyStandard, "item"> & { item?: string }): SafetyStandard => ({

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { demoRuleSet } from "@/db/seed/demo-rule-set";
-import { displayUnits } from "@/lib/scrutineer/display-units";
-import { entryDeclarationsSchema } from "@/lib/scrutineer/entry-declarations-schema";
-import { localDateInZone } from "@/lib/scrutineer/local-date-in-zone";
-import { recordSchema } from "@/lib/scrutineer/record-schema";
-import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import { localDateInZone } from "@/lib/scrutineer/calendar/local-date-in-zone";
+import { entryDeclarationsSchema } from "@/lib/scrutineer/classes/entry-declarations-schema";
+import { recordSchema } from "@/lib/scrutineer/records/record-schema";
+import { ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { displayUnits } from "@/lib/scrutineer/units/display-units";
 import { clubRuleSet, uuid7 } from "./fixtures";
 
 const header = {

@@ -1,12 +1,12 @@
 import fc from "fast-check";
 import jstat from "jstat";
 import { describe, expect, it } from "vitest";
-import { combineReadings } from "@/lib/scrutineer/combine-readings";
-import { conformanceProbability } from "@/lib/scrutineer/conformance-probability";
-import { decideLimit } from "@/lib/scrutineer/decide-limit";
-import { describeMargin } from "@/lib/scrutineer/describe-margin";
-import { findDisagreements } from "@/lib/scrutineer/find-disagreements";
-import { normalCdf } from "@/lib/scrutineer/normal-cdf";
+import { combineReadings } from "@/lib/scrutineer/measurement/combine-readings";
+import { conformanceProbability } from "@/lib/scrutineer/measurement/conformance-probability";
+import { decideLimit } from "@/lib/scrutineer/measurement/decide-limit";
+import { describeMargin } from "@/lib/scrutineer/measurement/describe-margin";
+import { findDisagreements } from "@/lib/scrutineer/measurement/find-disagreements";
+import { normalCdf } from "@/lib/scrutineer/measurement/normal-cdf";
 import { spread } from "./fixtures";
 
 const tape = (value: number, u = 0.5, instrumentId = "tape") => ({

@@ -1,13 +1,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { convertLength } from "@/lib/scrutineer/convert-length";
-import { convertMass } from "@/lib/scrutineer/convert-mass";
-import { convertPower } from "@/lib/scrutineer/convert-power";
-import { convertPowerToWeight } from "@/lib/scrutineer/convert-power-to-weight";
-import { convertPressure } from "@/lib/scrutineer/convert-pressure";
-import { convertTemperature } from "@/lib/scrutineer/convert-temperature";
-import { formatLength } from "@/lib/scrutineer/format-length";
-import { lengthTextSchema, parseLength } from "@/lib/scrutineer/parse-length";
+import { convertLength } from "@/lib/scrutineer/units/convert-length";
+import { convertMass } from "@/lib/scrutineer/units/convert-mass";
+import { convertPower } from "@/lib/scrutineer/units/convert-power";
+import { convertPowerToWeight } from "@/lib/scrutineer/units/convert-power-to-weight";
+import { convertPressure } from "@/lib/scrutineer/units/convert-pressure";
+import { convertTemperature } from "@/lib/scrutineer/units/convert-temperature";
+import { formatLength } from "@/lib/scrutineer/units/format-length";
+import { lengthTextSchema, parseLength } from "@/lib/scrutineer/units/parse-length";
 import { spread } from "./fixtures";
 
 describe("unit factors", () => {

@@ -1,8 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { voidChoices } from "@/components/tech/void-choices";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { resolveRecords } from "@/lib/scrutineer/resolve-records";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { resolveRecords } from "@/lib/scrutineer/records/resolve-records";
 import { lengthReading, note, voidRecord } from "./fixtures";
 
 // The void rule is our own product rule (no outside source): records are immutable, a void

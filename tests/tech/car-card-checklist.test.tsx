@@ -6,10 +6,14 @@ import { TechContext, type TechContextValue } from "@/components/tech/tech-conte
 import { VerdictView } from "@/components/tech/verdict-view";
 import { demoRuleSet } from "@/db/seed/demo-rule-set";
 import type { StoredPack } from "@/lib/offline/save-event-pack";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord, TechRecordOf } from "@/lib/scrutineer/record-schema";
-import { type RuleSet, type RuleSetInput, ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
-import type { Verdict } from "@/lib/scrutineer/verdict-schema";
+import type { TechRecord, TechRecordOf } from "@/lib/scrutineer/records/record-schema";
+import {
+  type RuleSet,
+  type RuleSetInput,
+  ruleSetSchema,
+} from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
+import type { Verdict } from "@/lib/scrutineer/verdicts/verdict-schema";
 import { partByTestId, render, textOf } from "../diagrams/render-markup";
 import { checklist, clubRuleSet, input, lengthReading } from "../scrutineer/fixtures";
 

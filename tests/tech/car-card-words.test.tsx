@@ -5,8 +5,8 @@ import { photoTypeProblem } from "@/components/tech/photo-type-problem";
 import { readingExample } from "@/components/tech/reading-example";
 import { recordByline } from "@/components/tech/record-byline";
 import type { LocalRecord } from "@/lib/offline/local-record";
-import { parseLength } from "@/lib/scrutineer/parse-length";
-import { LENGTH_DIMENSIONS, type TechRecord } from "@/lib/scrutineer/record-schema";
+import { LENGTH_DIMENSIONS, type TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { parseLength } from "@/lib/scrutineer/units/parse-length";
 import { render, textOf } from "../diagrams/render-markup";
 import { checklist, lengthReading, note, reading, voidRecord } from "../scrutineer/fixtures";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { ReadingPayload, TechRecordOf } from "@/lib/scrutineer/record-schema";
+import type { ReadingPayload, TechRecordOf } from "@/lib/scrutineer/records/record-schema";
 import { compareWithOwnReadings } from "@/lib/tech/compare-with-own-readings";
 import { uuid7 } from "../scrutineer/fixtures";
 

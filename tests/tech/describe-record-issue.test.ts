@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { incomingRecordSchema, RECORD_TEXT_LIMITS } from "@/lib/scrutineer/record-schema";
+import { incomingRecordSchema, RECORD_TEXT_LIMITS } from "@/lib/scrutineer/records/record-schema";
 import { describeRecordIssue } from "@/lib/tech/describe-record-issue";
 import { uuid7 } from "../scrutineer/fixtures";
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { evaluateEntry } from "@/lib/scrutineer/evaluate-entry";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { evaluateEntry } from "@/lib/scrutineer/verdicts/evaluate-entry";
 import { chiefAttention } from "@/lib/tech/chief-attention";
 import { needsChiefScrutineer } from "@/lib/tech/needs-chief-scrutineer";
 import { byOfficial, clubRuleSet, input, lengthReading, override } from "../scrutineer/fixtures";
@@ -45,7 +45,7 @@ describe("a standing override settles the car for the chief's queue", () => {
   });
 
   it("an override that does not fit settles nothing: the car still waits", () => {
-    // Cleared must name the declared class (lib/scrutineer/override-target-problem.ts).
+    // Cleared must name the declared class (lib/scrutineer/classes/override-target-problem.ts).
     const v = run([
       ...disagreeing,
       override(7, { status: "cleared", classId: "open", reason: "Entrant asked" }),

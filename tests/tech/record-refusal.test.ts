@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { recordRefusal } from "@/lib/tech/record-refusal";
 import { uuid7 } from "../scrutineer/fixtures";
 

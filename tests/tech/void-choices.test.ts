@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { voidChoices } from "@/components/tech/void-choices";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
 import { byOfficial, checklist, lengthReading, voidRecord } from "../scrutineer/fixtures";
 
 const names: Record<string, string> = {

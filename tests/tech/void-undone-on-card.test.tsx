@@ -4,8 +4,8 @@ import { PhotosNotesPanel } from "@/components/tech/photos-notes-panel";
 import { TechContext, type TechContextValue } from "@/components/tech/tech-context";
 import { demoRuleSet } from "@/db/seed/demo-rule-set";
 import type { StoredPack } from "@/lib/offline/save-event-pack";
-import type { TechRecord } from "@/lib/scrutineer/record-schema";
-import { resolveRecords } from "@/lib/scrutineer/resolve-records";
+import type { TechRecord } from "@/lib/scrutineer/records/record-schema";
+import { resolveRecords } from "@/lib/scrutineer/records/resolve-records";
 import { partByTestId, render, textOf } from "../diagrams/render-markup";
 import { note, voidRecord } from "../scrutineer/fixtures";
 

@@ -4,13 +4,13 @@ import { Caution } from "@/components/caution";
 import { ClassEnvelope } from "@/components/diagrams/class-envelope";
 import { ReadingDiagram } from "@/components/diagrams/reading-diagram";
 import { isDemo } from "@/lib/env";
-import { dimensionLabel } from "@/lib/scrutineer/dimension-labels";
+import { dimensionLabel } from "@/lib/scrutineer/measurement/dimension-labels";
 import {
   CORNERS,
   type Corner,
   type Dimension,
   LENGTH_DIMENSIONS,
-} from "@/lib/scrutineer/record-schema";
+} from "@/lib/scrutineer/records/record-schema";
 import { SAMPLE_ENVELOPES } from "./sample-envelopes";
 
 export const metadata: Metadata = { title: "Drawings for review" };

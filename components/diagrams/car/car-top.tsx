@@ -1,4 +1,4 @@
-import { CORNERS } from "@/lib/scrutineer/record-schema";
+import { CORNERS } from "@/lib/scrutineer/records/record-schema";
 import type { DiagramView } from "../parts/diagram-view";
 import { projectPath } from "../parts/project-path";
 import { TOP, TOP_BODY, TOP_GLASS, TOP_ROOF, wheelCentre } from "./top-geometry";

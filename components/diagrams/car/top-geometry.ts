@@ -1,4 +1,4 @@
-import type { Corner } from "@/lib/scrutineer/record-schema";
+import type { Corner } from "@/lib/scrutineer/records/record-schema";
 
 /**
  * The hatchback from above, front at the top, centred on x = 120, in the car's own units

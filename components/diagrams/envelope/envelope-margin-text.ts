@@ -1,6 +1,6 @@
-import { describeMargin } from "@/lib/scrutineer/describe-margin";
-import { displayUnits } from "@/lib/scrutineer/display-units";
-import type { DisplayLengthUnit } from "@/lib/scrutineer/format-length";
+import { describeMargin } from "@/lib/scrutineer/measurement/describe-margin";
+import { displayUnits } from "@/lib/scrutineer/units/display-units";
+import type { DisplayLengthUnit } from "@/lib/scrutineer/units/format-length";
 import type { EnvelopeCheck } from "./envelope-types";
 
 /**

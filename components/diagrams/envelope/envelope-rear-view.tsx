@@ -1,4 +1,4 @@
-import { formatLength } from "@/lib/scrutineer/format-length";
+import { formatLength } from "@/lib/scrutineer/units/format-length";
 import { CarRear } from "../car/car-rear";
 import { END } from "../car/end-geometry";
 import { WingRear } from "../car/wing-rear";

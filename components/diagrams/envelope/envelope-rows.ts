@@ -1,4 +1,4 @@
-import { formatLength } from "@/lib/scrutineer/format-length";
+import { formatLength } from "@/lib/scrutineer/units/format-length";
 import { envelopeMarginText } from "./envelope-margin-text";
 import type { ClassEnvelopeProps, EnvelopeCheck } from "./envelope-types";
 import { type OutcomeLook, outcomeLook } from "./outcome-look";

@@ -1,4 +1,4 @@
-import { formatLength } from "@/lib/scrutineer/format-length";
+import { formatLength } from "@/lib/scrutineer/units/format-length";
 import { CarSide } from "../car/car-side";
 import { SIDE, WING_SIDE } from "../car/side-geometry";
 import { WingSide } from "../car/wing-side";

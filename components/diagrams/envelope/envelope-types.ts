@@ -1,4 +1,4 @@
-import type { DisplayLengthUnit } from "@/lib/scrutineer/format-length";
+import type { DisplayLengthUnit } from "@/lib/scrutineer/units/format-length";
 
 /** How one limit stands: the verdict's rule outcome, less "not-applicable". */
 export type EnvelopeOutcome = "pass" | "fail" | "inconclusive" | "waiting";

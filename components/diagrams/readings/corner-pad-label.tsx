@@ -1,5 +1,5 @@
-import { CORNER_LABELS } from "@/lib/scrutineer/dimension-labels";
-import type { Corner } from "@/lib/scrutineer/record-schema";
+import { CORNER_LABELS } from "@/lib/scrutineer/measurement/dimension-labels";
+import type { Corner } from "@/lib/scrutineer/records/record-schema";
 import { DiagramLabel } from "../parts/diagram-label";
 
 /**

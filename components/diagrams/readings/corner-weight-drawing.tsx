@@ -1,4 +1,4 @@
-import { CORNERS, type Corner } from "@/lib/scrutineer/record-schema";
+import { CORNERS, type Corner } from "@/lib/scrutineer/records/record-schema";
 import { CarTop } from "../car/car-top";
 import { wheelCentre } from "../car/top-geometry";
 import { DiagramLabel } from "../parts/diagram-label";

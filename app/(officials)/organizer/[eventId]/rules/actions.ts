@@ -10,7 +10,7 @@ import { idSchema } from "@/lib/http/id-schema";
 import { checkRuleSetDraft } from "@/lib/rule-sets/check-rule-set-draft";
 import { pinRuleSet } from "@/lib/rule-sets/pin-rule-set";
 import { previewRuleSetChange } from "@/lib/rule-sets/preview-rule-set-change";
-import { MAX_RULE_SET_CHARS } from "@/lib/scrutineer/parse-rule-set-json";
+import { MAX_RULE_SET_CHARS } from "@/lib/scrutineer/rule-sets/parse-rule-set-json";
 
 const draftFormSchema = z.object({
   eventId: idSchema,

@@ -11,9 +11,9 @@ import { listRuleSetVersions } from "@/db/queries/list-rule-set-versions";
 import { loadEventPage } from "@/lib/auth/load-event-page";
 import { idSchema } from "@/lib/http/id-schema";
 import { previewRuleSetChange } from "@/lib/rule-sets/preview-rule-set-change";
-import { describeRuleSet } from "@/lib/scrutineer/describe-rule-set";
-import { displayUnits } from "@/lib/scrutineer/display-units";
-import { ruleSetSchema } from "@/lib/scrutineer/rule-set-schema";
+import { describeRuleSet } from "@/lib/scrutineer/rule-sets/describe-rule-set";
+import { ruleSetSchema } from "@/lib/scrutineer/rule-sets/rule-set-schema";
+import { displayUnits } from "@/lib/scrutineer/units/display-units";
 import { draftRuleSetAction, pinRuleSetAction } from "./actions";
 
 export const metadata: Metadata = { title: "Class rules" };
