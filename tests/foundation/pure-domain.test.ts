@@ -20,7 +20,12 @@ function filesUnder(dir: string): string[] {
 }
 
 function importsOf(source: string): string[] {
-  return [...source.matchAll(/(?:from|import)\s*\(?\s*["']([^"']+)["']/g)].map((m) => m[1] ?? "");
+  const statements = /^\s*(?:import|export)\b[^;]*?from\s*["']([^"']+)["']/gm;
+  const bare = /^\s*import\s*["']([^"']+)["']/gm;
+  const dynamic = /\bimport\(\s*["']([^"']+)["']\s*\)/g;
+  return [statements, bare, dynamic].flatMap((re) =>
+    [...source.matchAll(re)].map((m) => m[1] ?? ""),
+  );
 }
 
 describe.each(Object.keys(allowed))("%s stays pure", (folder) => {
