@@ -52,8 +52,13 @@ export function exactRunGroups(
       let hi = -1;
       let fast = Number.POSITIVE_INFINITY;
       let slow = 0;
+      let rankLo = Number.POSITIVE_INFINITY;
+      let rankHi = Number.NEGATIVE_INFINITY;
       for (const i of m) {
         classes.add(classOf[i] ?? 0);
+        const rank = instance.drives[i]?.classRank ?? 0;
+        rankLo = Math.min(rankLo, rank);
+        rankHi = Math.max(rankHi, rank);
         lo = Math.min(lo, experienceOf[i] ?? 0);
         hi = Math.max(hi, experienceOf[i] ?? 0);
         const lap = lapOf[i] ?? -1;
@@ -62,7 +67,10 @@ export function exactRunGroups(
           slow = Math.max(slow, lap);
         }
       }
-      total += w.classMix * (classes.size - 1) + w.experienceSpread * (hi - lo);
+      total +=
+        w.classMix * (classes.size - 1) +
+        w.classRankSpread * (rankHi - rankLo) +
+        w.experienceSpread * (hi - lo);
       if (slow > fast) total += w.lapSpreadMs * (slow - fast);
     }
     for (const i of order.slice(0, placed))

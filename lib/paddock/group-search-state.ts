@@ -51,6 +51,7 @@ export class GroupSearchState {
   private readonly classCount: Int32Array;
   private readonly distinct: Int32Array;
   private readonly levelCount: Int32Array;
+  private readonly rankCount: Int32Array;
   private readonly laps: number[][];
   private readonly novices: Int32Array;
   private readonly term: Float64Array;
@@ -69,6 +70,7 @@ export class GroupSearchState {
     this.classCount = new Int32Array(groupCount * instance.classCount);
     this.distinct = new Int32Array(groupCount);
     this.levelCount = new Int32Array(groupCount * 4);
+    this.rankCount = new Int32Array(groupCount * instance.rankValues.length);
     this.laps = Array.from({ length: groupCount }, () => []);
     this.novices = new Int32Array(groupCount);
     this.term = new Float64Array(groupCount);
@@ -84,6 +86,8 @@ export class GroupSearchState {
     const level = inst.experienceOf[i] ?? 0;
     this.levelCount[g * 4 + level] = (this.levelCount[g * 4 + level] ?? 0) + 1;
     if (level === 0) this.novices[g] = (this.novices[g] ?? 0) + 1;
+    const r = g * inst.rankValues.length + (inst.rankOf[i] ?? 0);
+    this.rankCount[r] = (this.rankCount[r] ?? 0) + 1;
     const lap = inst.lapOf[i] ?? -1;
     if (lap > 0) insertSorted(this.laps[g] ?? [], lap);
     this.size[g] = (this.size[g] ?? 0) + 1;
@@ -98,6 +102,8 @@ export class GroupSearchState {
     const level = inst.experienceOf[i] ?? 0;
     this.levelCount[g * 4 + level] = (this.levelCount[g * 4 + level] ?? 0) - 1;
     if (level === 0) this.novices[g] = (this.novices[g] ?? 0) - 1;
+    const r = g * inst.rankValues.length + (inst.rankOf[i] ?? 0);
+    this.rankCount[r] = (this.rankCount[r] ?? 0) - 1;
     const lap = inst.lapOf[i] ?? -1;
     if (lap > 0) removeSorted(this.laps[g] ?? [], lap);
     this.size[g] = (this.size[g] ?? 0) - 1;
@@ -128,12 +134,31 @@ export class GroupSearchState {
         hi = Math.max(hi, l);
       }
     }
+    const ranks = inst.rankValues.length;
+    const rOut = out >= 0 ? (inst.rankOf[out] ?? 0) : -1;
+    const rIn = into >= 0 ? (inst.rankOf[into] ?? 0) : -1;
+    let rLo = -1;
+    let rHi = -1;
+    for (let r = 0; r < ranks; r += 1) {
+      const count =
+        (this.rankCount[g * ranks + r] ?? 0) - (r === rOut ? 1 : 0) + (r === rIn ? 1 : 0);
+      if (count > 0) {
+        if (rLo < 0) rLo = r;
+        rHi = r;
+      }
+    }
+    const rankSpread = (inst.rankValues[rHi] ?? 0) - (inst.rankValues[rLo] ?? 0);
     const lap = spreadAfter(
       this.laps[g] ?? [],
       out >= 0 ? (inst.lapOf[out] ?? -1) : -1,
       into >= 0 ? (inst.lapOf[into] ?? -1) : -1,
     );
-    return w.classMix * (distinct - 1) + w.experienceSpread * (hi - lo) + w.lapSpreadMs * lap;
+    return (
+      w.classMix * (distinct - 1) +
+      w.classRankSpread * rankSpread +
+      w.experienceSpread * (hi - lo) +
+      w.lapSpreadMs * lap
+    );
   }
 
   private pairCost(i: number, gap: number): number {
