@@ -1,6 +1,8 @@
 import { hardPenalty } from "./group-search-state";
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights as w } from "./score-run-groups";
+import { planScoreWeights } from "./score-run-groups";
+
+const w = { ...planScoreWeights };
 
 /** Instances up to this many drives are searched exactly. */
 export const exactDriveLimit = 10;

@@ -1,5 +1,8 @@
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights as w } from "./score-run-groups";
+import { planScoreWeights } from "./score-run-groups";
+
+// Read once: the search asks for these millions of times.
+const w = { ...planScoreWeights };
 
 /** What one broken hard rule costs in the search: more than any possible soft total. */
 export const hardPenalty = 1e12;
@@ -55,6 +58,8 @@ export class GroupSearchState {
   private readonly laps: number[][];
   private readonly novices: Int32Array;
   private readonly term: Float64Array;
+  /** The novice part as it stands (kept up to date by `move`). */
+  private noviceNow = 0;
 
   constructor(
     readonly instance: RunGroupInstance,
@@ -76,6 +81,7 @@ export class GroupSearchState {
     this.term = new Float64Array(groupCount);
     for (let i = 0; i < this.n; i += 1) this.add(i, this.groupOf[i] ?? 0);
     for (let g = 0; g < groupCount; g += 1) this.term[g] = this.groupTerm(g, -1, -1);
+    this.noviceNow = this.noviceTerm(-1, -1, -1, -1);
   }
 
   private add(i: number, g: number) {
@@ -178,7 +184,7 @@ export class GroupSearchState {
     return delta;
   }
 
-  /** Novice term after moving drive a (and b) to new groups. */
+  /** Novice term after moving drive a (and b) to new groups (−1: none). */
   private noviceTerm(a: number, aTo: number, b: number, bTo: number): number {
     const f = this.instance.fastest;
     if (f < 0) return 0;
@@ -187,14 +193,8 @@ export class GroupSearchState {
     if (a === f) fg = aTo;
     if (b === f) fg = bTo;
     let count = this.novices[fg] ?? 0;
-    for (const [d, to] of [
-      [a, aTo],
-      [b, bTo],
-    ] as const) {
-      if (d < 0 || lv[d] !== 0) continue;
-      if (this.groupOf[d] === fg) count -= 1;
-      if (to === fg) count += 1;
-    }
+    if (a >= 0 && lv[a] === 0) count += (aTo === fg ? 1 : 0) - (this.groupOf[a] === fg ? 1 : 0);
+    if (b >= 0 && lv[b] === 0) count += (bTo === fg ? 1 : 0) - (this.groupOf[b] === fg ? 1 : 0);
     if (lv[f] === 0) count -= 1;
     return w.noviceWithFastest * count;
   }
@@ -220,7 +220,7 @@ export class GroupSearchState {
       (this.term[to] ?? 0) +
       this.conflictDelta(i, from, to, -1) +
       this.noviceTerm(i, to, -1, -1) -
-      this.noviceTerm(-1, -1, -1, -1) +
+      this.noviceNow +
       this.sizeTerm(from, -1, to, 1) -
       this.sizeTerm(-1, 0, -1, 0)
     );
@@ -238,7 +238,7 @@ export class GroupSearchState {
       this.conflictDelta(i, a, b, j) +
       this.conflictDelta(j, b, a, i) +
       this.noviceTerm(i, b, j, a) -
-      this.noviceTerm(-1, -1, -1, -1)
+      this.noviceNow
     );
   }
 
@@ -248,6 +248,7 @@ export class GroupSearchState {
     this.add(i, to);
     this.term[from] = this.groupTerm(from, -1, -1);
     this.term[to] = this.groupTerm(to, -1, -1);
+    this.noviceNow = this.noviceTerm(-1, -1, -1, -1);
   }
 
   swap(i: number, j: number) {

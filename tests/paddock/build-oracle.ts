@@ -22,29 +22,32 @@ export function conflictComponents(drives: Drive[]): number[][] {
   return [...byRoot.values()];
 }
 
-/** Every labelling of the component's drives with 0…G−1, looking for one that keeps conflicting
- *  drives at least two apart (different and not adjacent). */
+/** Depth-first over labellings of the component's drives with 0…G−1 (dropping a partial labelling
+ *  as soon as two conflicting drives sit less than two apart), looking for one that keeps
+ *  conflicting drives different and not adjacent. */
 export function spaceableAt(drives: Drive[], members: number[], groupCount: number): boolean {
   const k = members.length;
-  const label = new Array<number>(k).fill(0);
-  const total = groupCount ** k;
-  for (let code = 0; code < total; code++) {
-    let c = code;
-    for (let p = 0; p < k; p++) {
-      label[p] = c % groupCount;
-      c = Math.floor(c / groupCount);
-    }
-    let ok = true;
-    for (let p = 0; p < k && ok; p++)
-      for (let q = p + 1; q < k && ok; q++)
+  // Room for every drive two groups from the last (0, 2, 4…): no need to look further.
+  if (groupCount >= 2 * k - 1) return true;
+  const label = new Array<number>(k).fill(-1);
+  const place = (p: number): boolean => {
+    if (p === k) return true;
+    for (let g = 0; g < groupCount; g++) {
+      let ok = true;
+      for (let q = 0; q < p && ok; q++)
         if (
           conflict(drives[members[p] ?? 0] as Drive, drives[members[q] ?? 0] as Drive) &&
-          Math.abs((label[p] ?? 0) - (label[q] ?? 0)) < 2
+          Math.abs((label[q] ?? 0) - g) < 2
         )
           ok = false;
-    if (ok) return true;
-  }
-  return false;
+      if (!ok) continue;
+      label[p] = g;
+      if (place(p + 1)) return true;
+    }
+    label[p] = -1;
+    return false;
+  };
+  return place(0);
 }
 
 /**
