@@ -6,6 +6,9 @@ const w = { ...planScoreWeights };
 
 /** Instances up to this many drives are searched exactly. */
 export const exactDriveLimit = 10;
+/** Up to this many drives, when the heuristic finds no valid assignment for a number of groups,
+ *  the exact search looks (within its budget) before the builder adds a group. */
+export const exactFeasibilityLimit = 30;
 /** Search nodes one exact search may visit before it settles for the best found. */
 const nodeBudget = 3_000_000;
 
@@ -14,7 +17,8 @@ const nodeBudget = 3_000_000;
  * and every hard rule at each step, pruning a partial assignment whose objective can no longer beat
  * the best found (every part of the objective only grows as drives are added; the size part is
  * bounded from the sizes so far). Starts from `incumbent` (e.g. the heuristic's answer).
- * `proven` is false when the node budget ran out (the answer is then the best found).
+ * `proven` is false when the node budget ran out (the answer is then the best found); `groupOf` is
+ * null when no assignment keeps the hard rules (proven, or none found within the budget).
  */
 export function exactRunGroups(
   instance: RunGroupInstance,
@@ -22,7 +26,7 @@ export function exactRunGroups(
   cap: number,
   spaceable: readonly boolean[],
   incumbent: { groupOf: Int32Array; objective: number } | null,
-): { groupOf: Int32Array; objective: number; proven: boolean } | null {
+): { groupOf: Int32Array | null; objective: number; proven: boolean } {
   const n = instance.drives.length;
   const { classOf, experienceOf, lapOf, neighbours, componentOf, fastest } = instance;
   // Fastest drive first (so the novice part is known once it is placed), then most conflicts.
@@ -130,6 +134,5 @@ export function exactRunGroups(
     }
   };
   visit(0);
-  if (!bestGroups) return null;
   return { groupOf: bestGroups, objective: best, proven: !outOfNodes };
 }
