@@ -1,6 +1,6 @@
 import { checkRunGroups } from "./check-run-groups";
 import type { Drive } from "./drive";
-import { exactDriveLimit, exactRunGroups } from "./exact-run-groups";
+import { exactDriveLimit, exactFeasibilityLimit, exactRunGroups } from "./exact-run-groups";
 import { improveRunGroups } from "./improve-run-groups";
 import { orderGroupsByPace } from "./order-groups-by-pace";
 import { canPlaceApart } from "./place-apart";
@@ -28,7 +28,9 @@ function membersOf(groupOf: Int32Array, groupCount: number): number[][] {
  * where one car's or driver's drives need one group each), one more group only when the search finds
  * no assignment that keeps every hard rule. Within that number it minimises the weighted objective
  * of score-run-groups.ts. Up to `exactDriveLimit` drives the search is exact (branch and bound);
- * larger fields get the heuristic of improve-run-groups.ts. Groups then run fastest first where
+ * larger fields get the heuristic of improve-run-groups.ts, and up to `exactFeasibilityLimit`
+ * drives the exact search (within its node budget) also looks for a valid assignment before a
+ * group is added. Groups then run fastest first where
  * that keeps the rules (order-groups-by-pace.ts).
  *
  * The result is checked, not trusted: `checkRunGroups` re-derives every rule from the groups alone,
@@ -63,15 +65,15 @@ export function buildRunGroups({
       (m) => canPlaceApart(m, instance.neighbours, groupCount, 2) === true,
     );
     const heuristic = improveRunGroups(instance, groupCount, capCars, spaceable);
-    let best =
+    let best: { groupOf: Int32Array; objective: number } | null =
       heuristic.violations === 0
         ? { groupOf: heuristic.groupOf, objective: heuristic.objective }
         : null;
-    if (n <= exactDriveLimit) {
+    if (n <= exactDriveLimit || (!best && n <= exactFeasibilityLimit)) {
       const exact = exactRunGroups(instance, groupCount, capCars, spaceable, best);
-      if (exact && !exact.proven) provenBelow = false;
-      best = exact;
-    } else provenBelow = false;
+      if (!exact.proven) provenBelow = false;
+      best = exact.groupOf ? { groupOf: exact.groupOf, objective: exact.objective } : null;
+    } else if (!best) provenBelow = false;
     if (best) {
       const score = scoreRunGroups(instance, membersOf(best.groupOf, groupCount));
       if (score.total !== best.objective)

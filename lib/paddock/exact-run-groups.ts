@@ -1,9 +1,14 @@
 import { hardPenalty } from "./group-search-state";
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights as w } from "./score-run-groups";
+import { planScoreWeights } from "./score-run-groups";
+
+const w = { ...planScoreWeights };
 
 /** Instances up to this many drives are searched exactly. */
 export const exactDriveLimit = 10;
+/** Up to this many drives, when the heuristic finds no valid assignment for a number of groups,
+ *  the exact search looks (within its budget) before the builder adds a group. */
+export const exactFeasibilityLimit = 30;
 /** Search nodes one exact search may visit before it settles for the best found. */
 const nodeBudget = 3_000_000;
 
@@ -12,7 +17,8 @@ const nodeBudget = 3_000_000;
  * and every hard rule at each step, pruning a partial assignment whose objective can no longer beat
  * the best found (every part of the objective only grows as drives are added; the size part is
  * bounded from the sizes so far). Starts from `incumbent` (e.g. the heuristic's answer).
- * `proven` is false when the node budget ran out (the answer is then the best found).
+ * `proven` is false when the node budget ran out (the answer is then the best found); `groupOf` is
+ * null when no assignment keeps the hard rules (proven, or none found within the budget).
  */
 export function exactRunGroups(
   instance: RunGroupInstance,
@@ -20,7 +26,7 @@ export function exactRunGroups(
   cap: number,
   spaceable: readonly boolean[],
   incumbent: { groupOf: Int32Array; objective: number } | null,
-): { groupOf: Int32Array; objective: number; proven: boolean } | null {
+): { groupOf: Int32Array | null; objective: number; proven: boolean } {
   const n = instance.drives.length;
   const { classOf, experienceOf, lapOf, neighbours, componentOf, fastest } = instance;
   // Fastest drive first (so the novice part is known once it is placed), then most conflicts.
@@ -52,8 +58,13 @@ export function exactRunGroups(
       let hi = -1;
       let fast = Number.POSITIVE_INFINITY;
       let slow = 0;
+      let rankLo = Number.POSITIVE_INFINITY;
+      let rankHi = Number.NEGATIVE_INFINITY;
       for (const i of m) {
         classes.add(classOf[i] ?? 0);
+        const rank = instance.drives[i]?.classRank ?? 0;
+        rankLo = Math.min(rankLo, rank);
+        rankHi = Math.max(rankHi, rank);
         lo = Math.min(lo, experienceOf[i] ?? 0);
         hi = Math.max(hi, experienceOf[i] ?? 0);
         const lap = lapOf[i] ?? -1;
@@ -62,7 +73,10 @@ export function exactRunGroups(
           slow = Math.max(slow, lap);
         }
       }
-      total += w.classMix * (classes.size - 1) + w.experienceSpread * (hi - lo);
+      total +=
+        w.classMix * (classes.size - 1) +
+        w.classRankSpread * (rankHi - rankLo) +
+        w.experienceSpread * (hi - lo);
       if (slow > fast) total += w.lapSpreadMs * (slow - fast);
     }
     for (const i of order.slice(0, placed))
@@ -120,6 +134,5 @@ export function exactRunGroups(
     }
   };
   visit(0);
-  if (!bestGroups) return null;
   return { groupOf: bestGroups, objective: best, proven: !outOfNodes };
 }

@@ -1,5 +1,8 @@
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights as w } from "./score-run-groups";
+import { planScoreWeights } from "./score-run-groups";
+
+// Read once: the search asks for these millions of times.
+const w = { ...planScoreWeights };
 
 /** What one broken hard rule costs in the search: more than any possible soft total. */
 export const hardPenalty = 1e12;
@@ -51,9 +54,12 @@ export class GroupSearchState {
   private readonly classCount: Int32Array;
   private readonly distinct: Int32Array;
   private readonly levelCount: Int32Array;
+  private readonly rankCount: Int32Array;
   private readonly laps: number[][];
   private readonly novices: Int32Array;
   private readonly term: Float64Array;
+  /** The novice part as it stands (kept up to date by `move`). */
+  private noviceNow = 0;
 
   constructor(
     readonly instance: RunGroupInstance,
@@ -69,11 +75,13 @@ export class GroupSearchState {
     this.classCount = new Int32Array(groupCount * instance.classCount);
     this.distinct = new Int32Array(groupCount);
     this.levelCount = new Int32Array(groupCount * 4);
+    this.rankCount = new Int32Array(groupCount * instance.rankValues.length);
     this.laps = Array.from({ length: groupCount }, () => []);
     this.novices = new Int32Array(groupCount);
     this.term = new Float64Array(groupCount);
     for (let i = 0; i < this.n; i += 1) this.add(i, this.groupOf[i] ?? 0);
     for (let g = 0; g < groupCount; g += 1) this.term[g] = this.groupTerm(g, -1, -1);
+    this.noviceNow = this.noviceTerm(-1, -1, -1, -1);
   }
 
   private add(i: number, g: number) {
@@ -84,6 +92,8 @@ export class GroupSearchState {
     const level = inst.experienceOf[i] ?? 0;
     this.levelCount[g * 4 + level] = (this.levelCount[g * 4 + level] ?? 0) + 1;
     if (level === 0) this.novices[g] = (this.novices[g] ?? 0) + 1;
+    const r = g * inst.rankValues.length + (inst.rankOf[i] ?? 0);
+    this.rankCount[r] = (this.rankCount[r] ?? 0) + 1;
     const lap = inst.lapOf[i] ?? -1;
     if (lap > 0) insertSorted(this.laps[g] ?? [], lap);
     this.size[g] = (this.size[g] ?? 0) + 1;
@@ -98,6 +108,8 @@ export class GroupSearchState {
     const level = inst.experienceOf[i] ?? 0;
     this.levelCount[g * 4 + level] = (this.levelCount[g * 4 + level] ?? 0) - 1;
     if (level === 0) this.novices[g] = (this.novices[g] ?? 0) - 1;
+    const r = g * inst.rankValues.length + (inst.rankOf[i] ?? 0);
+    this.rankCount[r] = (this.rankCount[r] ?? 0) - 1;
     const lap = inst.lapOf[i] ?? -1;
     if (lap > 0) removeSorted(this.laps[g] ?? [], lap);
     this.size[g] = (this.size[g] ?? 0) - 1;
@@ -128,12 +140,31 @@ export class GroupSearchState {
         hi = Math.max(hi, l);
       }
     }
+    const ranks = inst.rankValues.length;
+    const rOut = out >= 0 ? (inst.rankOf[out] ?? 0) : -1;
+    const rIn = into >= 0 ? (inst.rankOf[into] ?? 0) : -1;
+    let rLo = -1;
+    let rHi = -1;
+    for (let r = 0; r < ranks; r += 1) {
+      const count =
+        (this.rankCount[g * ranks + r] ?? 0) - (r === rOut ? 1 : 0) + (r === rIn ? 1 : 0);
+      if (count > 0) {
+        if (rLo < 0) rLo = r;
+        rHi = r;
+      }
+    }
+    const rankSpread = (inst.rankValues[rHi] ?? 0) - (inst.rankValues[rLo] ?? 0);
     const lap = spreadAfter(
       this.laps[g] ?? [],
       out >= 0 ? (inst.lapOf[out] ?? -1) : -1,
       into >= 0 ? (inst.lapOf[into] ?? -1) : -1,
     );
-    return w.classMix * (distinct - 1) + w.experienceSpread * (hi - lo) + w.lapSpreadMs * lap;
+    return (
+      w.classMix * (distinct - 1) +
+      w.classRankSpread * rankSpread +
+      w.experienceSpread * (hi - lo) +
+      w.lapSpreadMs * lap
+    );
   }
 
   private pairCost(i: number, gap: number): number {
@@ -153,7 +184,7 @@ export class GroupSearchState {
     return delta;
   }
 
-  /** Novice term after moving drive a (and b) to new groups. */
+  /** Novice term after moving drive a (and b) to new groups (−1: none). */
   private noviceTerm(a: number, aTo: number, b: number, bTo: number): number {
     const f = this.instance.fastest;
     if (f < 0) return 0;
@@ -162,14 +193,8 @@ export class GroupSearchState {
     if (a === f) fg = aTo;
     if (b === f) fg = bTo;
     let count = this.novices[fg] ?? 0;
-    for (const [d, to] of [
-      [a, aTo],
-      [b, bTo],
-    ] as const) {
-      if (d < 0 || lv[d] !== 0) continue;
-      if (this.groupOf[d] === fg) count -= 1;
-      if (to === fg) count += 1;
-    }
+    if (a >= 0 && lv[a] === 0) count += (aTo === fg ? 1 : 0) - (this.groupOf[a] === fg ? 1 : 0);
+    if (b >= 0 && lv[b] === 0) count += (bTo === fg ? 1 : 0) - (this.groupOf[b] === fg ? 1 : 0);
     if (lv[f] === 0) count -= 1;
     return w.noviceWithFastest * count;
   }
@@ -195,7 +220,7 @@ export class GroupSearchState {
       (this.term[to] ?? 0) +
       this.conflictDelta(i, from, to, -1) +
       this.noviceTerm(i, to, -1, -1) -
-      this.noviceTerm(-1, -1, -1, -1) +
+      this.noviceNow +
       this.sizeTerm(from, -1, to, 1) -
       this.sizeTerm(-1, 0, -1, 0)
     );
@@ -213,7 +238,7 @@ export class GroupSearchState {
       this.conflictDelta(i, a, b, j) +
       this.conflictDelta(j, b, a, i) +
       this.noviceTerm(i, b, j, a) -
-      this.noviceTerm(-1, -1, -1, -1)
+      this.noviceNow
     );
   }
 
@@ -223,6 +248,7 @@ export class GroupSearchState {
     this.add(i, to);
     this.term[from] = this.groupTerm(from, -1, -1);
     this.term[to] = this.groupTerm(to, -1, -1);
+    this.noviceNow = this.noviceTerm(-1, -1, -1, -1);
   }
 
   swap(i: number, j: number) {

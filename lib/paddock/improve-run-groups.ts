@@ -59,13 +59,21 @@ export function improveRunGroups(
   return { ...best, violations: final.violating().length };
 }
 
-/** Best-improvement descent: for each drive the best move or swap, until a pass changes nothing. */
+/**
+ * Best-improvement descent: for each drive the best move or swap, until a pass changes nothing.
+ * After the first pass, a drive in a group nothing changed in since the previous pass (and with no
+ * conflicting drive, whose group may have moved) only looks at swaps into groups that changed:
+ * between two unchanged groups nothing can have become better.
+ */
 function descend(state: GroupSearchState) {
-  const { n, groupCount, cap } = state;
-  for (let pass = 0; pass < maxPasses; pass += 1) {
+  const { n, groupCount, cap, instance } = state;
+  const changedAt = new Int32Array(groupCount).fill(0);
+  for (let pass = 1; pass <= maxPasses; pass += 1) {
     let changed = false;
+    const fresh = (g: number) => (changedAt[g] ?? 0) >= pass - 1;
     for (let i = 0; i < n; i += 1) {
       const from = state.groupOf[i] ?? 0;
+      const everyGroup = pass === 1 || fresh(from) || (instance.neighbours[i]?.length ?? 0) > 0;
       let bestDelta = 0;
       let bestMove = -1;
       let bestSwap = -1;
@@ -79,7 +87,8 @@ function descend(state: GroupSearchState) {
         }
       }
       for (let j = 0; j < n; j += 1) {
-        if (state.groupOf[j] === from) continue;
+        const to = state.groupOf[j] ?? 0;
+        if (to === from || (!everyGroup && !fresh(to))) continue;
         const d = state.swapDelta(i, j);
         if (d < bestDelta) {
           bestDelta = d;
@@ -87,9 +96,16 @@ function descend(state: GroupSearchState) {
           bestMove = -1;
         }
       }
-      if (bestMove >= 0) state.move(i, bestMove);
-      else if (bestSwap >= 0) state.swap(i, bestSwap);
-      else continue;
+      let to = -1;
+      if (bestMove >= 0) {
+        to = bestMove;
+        state.move(i, bestMove);
+      } else if (bestSwap >= 0) {
+        to = state.groupOf[bestSwap] ?? 0;
+        state.swap(i, bestSwap);
+      } else continue;
+      changedAt[from] = pass;
+      changedAt[to] = pass;
       changed = true;
     }
     if (!changed) return;

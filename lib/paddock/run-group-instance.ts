@@ -14,6 +14,9 @@ export type RunGroupInstance = {
   indexOf: Map<string, number>;
   classOf: Int32Array;
   classCount: number;
+  /** Index into `rankValues` of the drive's class rank (the distinct ranks, ascending). */
+  rankOf: Int32Array;
+  rankValues: number[];
   experienceOf: Int32Array;
   /** Lap-time estimate in ms, −1 when the driver gave none. */
   lapOf: Float64Array;
@@ -38,6 +41,9 @@ export function runGroupInstance(input: readonly Drive[]): RunGroupInstance {
   const classIds = [...new Set(drives.map((d) => d.classId))].sort();
   const classIndex = new Map(classIds.map((c, i) => [c, i]));
   const classOf = Int32Array.from(drives, (d) => classIndex.get(d.classId) ?? 0);
+  const rankValues = [...new Set(drives.map((d) => d.classRank))].sort((a, b) => a - b);
+  const rankIndex = new Map(rankValues.map((r, i) => [r, i]));
+  const rankOf = Int32Array.from(drives, (d) => rankIndex.get(d.classRank) ?? 0);
   const experienceOf = Int32Array.from(drives, (d) => experienceLevels.indexOf(d.experience));
   const lapOf = Float64Array.from(drives, (d) => d.lapTimeMs ?? -1);
   const neighbours: ConflictEdge[][] = drives.map(() => []);
@@ -71,6 +77,8 @@ export function runGroupInstance(input: readonly Drive[]): RunGroupInstance {
     indexOf,
     classOf,
     classCount: classIds.length,
+    rankOf,
+    rankValues,
     experienceOf,
     lapOf,
     neighbours,

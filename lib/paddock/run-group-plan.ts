@@ -40,6 +40,8 @@ export type PlanScore = {
   backToBack: number;
   /** Σ over groups of (distinct classes in the group − 1). */
   classMix: number;
+  /** Σ over groups of (highest − lowest class rank on the ladder). */
+  classRankSpread: number;
   /** Novice drives in the group of the fastest lap-time estimate (the fastest drive itself excluded). */
   noviceWithFastest: number;
   /** Σ over groups of (highest − lowest experience level), levels counted 0…3. */

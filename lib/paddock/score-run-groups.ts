@@ -13,6 +13,8 @@ import type { PlanScore } from "./run-group-plan";
  * - `noviceWithFastest` (200 000 per novice): novices in the group of the fastest lap-time estimate
  *   ("novices never with the fastest group where it can be avoided").
  * - `classMix` (100 000 per extra class): Σ over groups of (distinct classes − 1) — classes together.
+ * - `classRankSpread` (30 000 per rung): Σ over groups of (highest − lowest `classRank`), so where
+ *   classes must mix, neighbouring classes on the ladder mix rather than far-apart ones.
  * - `experienceSpread` (20 000 per level): Σ over groups of (highest − lowest experience level,
  *   novice 0 … expert 3) — experience levels together.
  * - `sizeSpread` (10 000 per car): largest − smallest group — sizes balanced.
@@ -20,13 +22,14 @@ import type { PlanScore } from "./run-group-plan";
  *   without an estimate adds nothing to any spread (it is neither fast nor slow); a group with
  *   fewer than two estimates has spread 0.
  *
- * In words: one extra class in a group costs as much as 100 s of lap-time spread, one experience
+ * In words: one extra class in a group costs as much as 100 s of lap-time spread, one rung of class-rank spread 30 s, one experience
  * step 20 s, one car of size imbalance 10 s.
  */
 export const planScoreWeights = {
   backToBack: 1_000_000_000,
   noviceWithFastest: 200_000,
   classMix: 100_000,
+  classRankSpread: 30_000,
   experienceSpread: 20_000,
   sizeSpread: 10_000,
   lapSpreadMs: 1,
@@ -39,6 +42,7 @@ export function weightedTotal(parts: Omit<PlanScore, "groups" | "total">): numbe
     w.backToBack * parts.backToBack +
     w.noviceWithFastest * parts.noviceWithFastest +
     w.classMix * parts.classMix +
+    w.classRankSpread * parts.classRankSpread +
     w.experienceSpread * parts.experienceSpread +
     w.sizeSpread * parts.sizeSpread +
     w.lapSpreadMs * parts.lapSpreadMs
@@ -66,11 +70,14 @@ export function scoreRunGroups(
     }
   });
   let classMix = 0;
+  let classRankSpread = 0;
   let experienceSpread = 0;
   let lapSpreadMs = 0;
   for (const m of members) {
     if (m.length === 0) continue;
     classMix += new Set(m.map((i) => instance.classOf[i])).size - 1;
+    const ranks = m.map((i) => instance.drives[i]?.classRank ?? 0);
+    classRankSpread += Math.max(...ranks) - Math.min(...ranks);
     const levels = m.map((i) => instance.experienceOf[i] ?? 0);
     experienceSpread += Math.max(...levels) - Math.min(...levels);
     const laps = m.map((i) => instance.lapOf[i] ?? -1).filter((l) => l > 0);
@@ -87,6 +94,7 @@ export function scoreRunGroups(
     backToBack,
     noviceWithFastest,
     classMix,
+    classRankSpread,
     experienceSpread,
     sizeSpread,
     lapSpreadMs,
