@@ -44,11 +44,11 @@ async function signedIn(email: string): Promise<HttpSession> {
 async function download(email: string, what: string) {
   const response = await (await signedIn(email)).fetch(`/api/events/${eventId}/${what}/csv`);
   const bytes = new Uint8Array(await response.arrayBuffer());
-  return {
-    response,
-    bytes,
-    rows: parse(Buffer.from(bytes), { bom: true, columns: true }) as Row[],
-  };
+  const rows =
+    response.status === 200
+      ? (parse(Buffer.from(bytes), { bom: true, columns: true }) as Row[])
+      : [];
+  return { response, bytes, rows };
 }
 
 /** The venue's wall-clock time of an instant, worked with Intl here (not the app's formatter). */
