@@ -25,6 +25,8 @@ import {
 } from "drizzle-orm/mysql-core";
 import { v7 as uuidv7 } from "uuid";
 import { eventRoles } from "../lib/auth/roles";
+import { experienceLevels } from "../lib/paddock/drive";
+import { sessionCallStates } from "../lib/paddock/session-call";
 
 /**
  * Identifiers, tokens, slugs, keys and e-mail addresses compare byte for byte. The server's
@@ -179,6 +181,8 @@ export const events = mysqlTable("events", {
   entryFeeMinor: int("entry_fee_minor").notNull(),
   currency: char("currency", { length: 3 }).notNull(),
   capacity: smallint("capacity").notNull(),
+  /** Minutes after provisional results are issued during which a protest may be lodged. */
+  protestWindowMinutes: smallint("protest_window_minutes").notNull().default(30),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });
@@ -253,6 +257,10 @@ export const entries = mysqlTable(
       .references(() => users.id),
     coDriverId: userId("co_driver_id").references(() => users.id),
     lapTimeEstimateMs: int("lap_time_estimate_ms"),
+    /** Each driver's declared experience (lib/paddock/drive.ts); null = not said (run as novice). */
+    driverExperience: mysqlEnum("driver_experience", experienceLevels),
+    coDriverExperience: mysqlEnum("co_driver_experience", experienceLevels),
+    coDriverLapTimeEstimateMs: int("co_driver_lap_time_estimate_ms"),
     /** Entrant declarations (dyno sheet, tyres, modification points), shaped by lib/scrutineer. */
     declarations: json("declarations").notNull(),
     status: mysqlEnum("status", ["entered", "withdrawn"]).notNull().default("entered"),
@@ -365,6 +373,68 @@ export const runGroupPublications = mysqlTable(
     publishedAt: datetime("published_at", { mode: "date", fsp: 3 }).notNull(),
   },
   (t) => [uniqueIndex("run_group_publications_event_version_unique").on(t.eventId, t.version)],
+);
+
+/** The clerk of course's working copy of the run groups and the day's layout: one per event,
+ *  changed in place (a draft is not a record); `revision` stops two desks overwriting each other. */
+export const runGroupDrafts = mysqlTable("run_group_drafts", {
+  eventId: uuid("event_id")
+    .primaryKey()
+    .references(() => events.id),
+  groups: json("groups").notNull(),
+  settings: json("settings").notNull(),
+  capCars: smallint("cap_cars").notNull(),
+  revision: int("revision").notNull(),
+  updatedBy: userId("updated_by")
+    .notNull()
+    .references(() => users.id),
+  updatedAt: updatedAt(),
+});
+
+/** What the clerk of course marks on a session during the day (append-only; latest wins). */
+export const sessionCalls = mysqlTable(
+  "session_calls",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    sessionKey: key("session_key", 8).notNull(),
+    state: mysqlEnum("state", sessionCallStates).notNull(),
+    note: varchar("note", { length: 500 }),
+    calledAt: datetime("called_at", { mode: "date", fsp: 3 }).notNull(),
+    calledBy: userId("called_by")
+      .notNull()
+      .references(() => users.id),
+  },
+  (t) => [index("session_calls_event_idx").on(t.eventId, t.calledAt)],
+);
+
+/** A car sent back to the tech line after an incident or a protest: its verdict waits until a
+ *  scrutineer has looked at it again and the chief scrutineer closes the re-inspection. */
+export const reinspections = mysqlTable(
+  "reinspections",
+  {
+    id: uuid("id").primaryKey(),
+    eventId: uuid("event_id")
+      .notNull()
+      .references(() => events.id),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    cause: mysqlEnum("cause", ["incident", "protest", "other"]).notNull(),
+    askedBy: varchar("asked_by", { length: 160 }).notNull(),
+    askedAt: datetime("asked_at", { mode: "date", fsp: 3 }).notNull(),
+    reason: varchar("reason", { length: 1000 }).notNull(),
+    createdBy: userId("created_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    closedAt: datetime("closed_at", { mode: "date", fsp: 3 }),
+    closedBy: userId("closed_by").references(() => users.id),
+    closingNote: varchar("closing_note", { length: 1000 }),
+  },
+  (t) => [index("reinspections_event_entry_idx").on(t.eventId, t.entryId)],
 );
 
 // ── Money, waivers, uploads ────────────────────────────────────────────────────────────────
