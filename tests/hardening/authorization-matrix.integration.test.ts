@@ -143,6 +143,15 @@ const routes: Record<string, Row> = {
     expect: only(200, "chief", "clerk"),
     call: get((c) => `/api/events/${c.eventId}/chief-report/csv`),
   },
+  "GET /api/events/[eventId]/run-sheet/csv": {
+    // Allowed callers get the latest run sheet, or 404 ("none published yet") when no test file
+    // has published one: both mean the guard let them through.
+    expect: only(200, ...officials),
+    call: async (s, c) => {
+      const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
+      return status === 404 ? 200 : status;
+    },
+  },
 };
 
 // A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
@@ -208,6 +217,10 @@ const printPages: Record<string, Row> = {
   "/tech/[eventId]/print/chief-report": {
     expect: signedInPage(only(200, "chief", "clerk")),
     call: get((c) => `/tech/${c.eventId}/print/chief-report`),
+  },
+  "/clerk/[eventId]/print/run-sheet": {
+    expect: signedInPage(only(200, ...officials)),
+    call: get((c) => `/clerk/${c.eventId}/print/run-sheet`),
   },
 };
 

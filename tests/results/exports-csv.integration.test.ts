@@ -3,6 +3,8 @@
 import { randomUUID } from "node:crypto";
 import { parse } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { buildSchedule } from "@/lib/paddock/build-schedule";
+import { type RunSheet, runSheetSchema } from "@/lib/paddock/run-sheet-schema";
 import { demo } from "../support/demo-accounts";
 import { HttpSession } from "../support/http-session";
 import { queryTestDb } from "../support/query-test-db";
@@ -206,5 +208,120 @@ describe("GET /api/events/:id/chief-report/csv", () => {
     expect((await download(demo.chief, "chief-report")).response.status).toBe(200);
     expect((await download(demo.scrutineer, "chief-report")).response.status).toBe(403);
     expect((await download(demo.registrar, "chief-report")).response.status).toBe(403);
+  });
+});
+
+describe("GET /api/events/:id/run-sheet/csv", () => {
+  const publicationId = randomUUID();
+  let body: RunSheet;
+
+  beforeAll(async () => {
+    // A run sheet as publishing stores it: two groups of demo cars, the day laid out by
+    // buildSchedule; stored as the event's next version and taken out again afterwards.
+    const [event] = await queryTestDb<{ event_date: string | Date }>(
+      databaseUrl,
+      "select event_date from events where id = ?",
+      [eventId],
+    );
+    const eventDate =
+      event?.event_date instanceof Date
+        ? event.event_date.toISOString().slice(0, 10)
+        : String(event?.event_date).slice(0, 10);
+    const ready = cars.filter((c) => c.status === "cleared" || c.status === "moved-up").slice(0, 6);
+    const entryRows = await queryTestDb<{
+      id: string;
+      car_number: number;
+      name: string;
+      driver_id: string;
+      car_id: string;
+    }>(
+      databaseUrl,
+      `select e.id, e.car_number, u.name, e.driver_id, e.car_id from entries e join users u on u.id = e.driver_id
+        where e.event_id = ? and e.car_number in (${ready.map(() => "?").join(", ")}) order by e.car_number`,
+      [eventId, ...ready.map((c) => c.car_number)],
+    );
+    const drives = entryRows.map((e) => ({
+      driveId: `${e.id}:1`,
+      entryId: e.id,
+      carNumber: e.car_number,
+      carKey: e.car_id,
+      driverKey: e.driver_id,
+      driverName: e.name,
+      classId: "c",
+      className: "Test class",
+      classRank: 0,
+      experience: "intermediate" as const,
+      lapTimeMs: 100_000,
+    }));
+    const settings = {
+      dayStart: "09:00",
+      dayEnd: "17:00",
+      sessionMinutes: 20,
+      gapMinutes: 10,
+      lunch: { start: "12:30", minutes: 45 },
+      rounds: 2,
+      briefing: { start: "08:15", minutes: 30 },
+    };
+    const groups = [
+      { name: "Group A", driveIds: drives.slice(0, 3).map((d) => d.driveId) },
+      { name: "Group B", driveIds: drives.slice(3).map((d) => d.driveId) },
+    ];
+    const { sessions, blocks } = buildSchedule({ eventDate, timeZone, settings, groupCount: 2 });
+    body = runSheetSchema.parse({
+      timeZone,
+      eventDate,
+      drives,
+      groups,
+      settings,
+      sessions,
+      blocks,
+      explanations: {},
+      gaveWay: [],
+      cap: { cars: 3, source: "3 cars: a test value" },
+    });
+    const [clerk] = await queryTestDb<{ id: string }>(
+      databaseUrl,
+      "select id from users where email = ?",
+      [demo.clerk],
+    );
+    const [last] = await queryTestDb<{ v: number | null }>(
+      databaseUrl,
+      "select max(version) as v from run_group_publications where event_id = ?",
+      [eventId],
+    );
+    await queryTestDb(
+      databaseUrl,
+      `insert into run_group_publications (id, event_id, version, body, published_by, published_at)
+       values (?, ?, ?, ?, ?, utc_timestamp(3))`,
+      [publicationId, eventId, Number(last?.v ?? 0) + 1, JSON.stringify(body), clerk?.id],
+    );
+  });
+
+  afterAll(async () => {
+    await queryTestDb(databaseUrl, "delete from run_group_publications where id = ?", [
+      publicationId,
+    ]);
+  });
+
+  it("downloads the latest run sheet, one line per drive, with each round's local start", async () => {
+    const { response, rows, bytes } = await download(demo.registrar, "run-sheet");
+    expect(response.status).toBe(200);
+    expect(response.headers.get("content-disposition")).toMatch(
+      /^attachment; filename="run-sheet-v\d+-[a-z0-9-]+-\d{4}-\d{2}-\d{2}-\d{4}\.csv"$/,
+    );
+    expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+    expect(rows.map((r) => [r.Group, Number(r.Car)])).toEqual(
+      body.groups.flatMap((g) =>
+        g.driveIds.map((id) => [g.name, body.drives.find((d) => d.driveId === id)?.carNumber]),
+      ),
+    );
+    // Each start as the venue's wall-clock time (worked here with Intl from the stored instant).
+    for (const r of rows) {
+      const index = r.Group === "Group A" ? 1 : 2;
+      const stored = body.sessions.find((s) => s.round === 1 && s.groupIndex === index);
+      expect(r["Round 1 start"]?.slice(0, 16).replace("T", " ")).toBe(
+        venueTime(new Date(stored?.startsAt ?? 0)),
+      );
+    }
   });
 });
