@@ -92,7 +92,7 @@ function CarReport({ car }: { car: ChiefReportCar }) {
         </p>
       ) : null}
       <p className="text-asphalt-800">
-        {car.records} {car.records === 1 ? "record" : "records"} at the tech line.
+        {`${car.records} ${car.records === 1 ? "record" : "records"} at the tech line.`}
       </p>
     </div>
   );
