@@ -82,8 +82,17 @@ async function signedIn(browser: Browser, email: string) {
   return { context, page };
 }
 
-/** The page rendered as Chromium prints it, read back, plus a screenshot in print media. */
-async function printed(page: Page, name: string): Promise<PdfPage[]> {
+// The layout's page box (components/print/print.css): A4 less 12 mm margins at the sides and top
+// and 14 mm at the bottom, passed to page.pdf too so the PDF has the same box whichever wins.
+const MARGIN = { top: "12mm", right: "12mm", bottom: "14mm", left: "12mm" };
+// CSS px are 1/96 in (CSS Values 4 §6.2): the content box is 186 × 271 mm = 703 × 1024 px.
+const CONTENT_PX = { width: Math.round((186 / 25.4) * 96), height: (271 / 25.4) * 96 };
+
+type Printed = { pages: PdfPage[]; heights: Map<string, number> };
+
+/** The page rendered as Chromium prints it and read back, each block's printed height (by its
+ *  heading), and a screenshot in print media. */
+async function printed(page: Page, name: string): Promise<Printed> {
   await page.emulateMedia({ media: "print" });
   // Each block the layout marks is kept whole by its CSS.
   const breaks = await page
@@ -94,16 +103,30 @@ async function printed(page: Page, name: string): Promise<PdfPage[]> {
   // Nothing of the site's frame or the buttons prints.
   await expect(page.locator("body > header")).toBeHidden();
   await expect(page.getByRole("button", { name: "Print" })).toBeHidden();
+  // Laid out at the page box's width, as print lays it out: how tall each block is.
+  await page.setViewportSize({ width: CONTENT_PX.width, height: Math.round(CONTENT_PX.height) });
+  const heights = new Map(
+    await page
+      .getByTestId("print-block")
+      .evaluateAll((els) =>
+        els.map(
+          (el) =>
+            [
+              (el.querySelector("h2")?.textContent ?? "").trim(),
+              el.getBoundingClientRect().height,
+            ] as [string, number],
+        ),
+      ),
+  );
   mkdirSync(SHOTS, { recursive: true });
-  await page.setViewportSize({ width: 794, height: 1123 }); // A4 at 96 px per inch
-  await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true });
-  const pdf = await page.pdf({ format: "A4" });
+  await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true, scale: "css" });
+  const pdf = await page.pdf({ format: "A4", margin: MARGIN });
   const pages = await readPdf(pdf);
   for (const p of pages) {
     expect(Math.abs(p.widthPt - A4_PT.width)).toBeLessThan(1);
     expect(Math.abs(p.heightPt - A4_PT.height)).toBeLessThan(1);
   }
-  return pages;
+  return { pages, heights };
 }
 
 /** Pages whose text holds `text` (spaces ignored). */
@@ -113,13 +136,28 @@ const pagesWith = (pages: PdfPage[], text: string) =>
 const pagesWithNumber = (pages: PdfPage[], n: number) =>
   pages.flatMap((p, i) => (p.items.includes(String(n)) ? [i] : []));
 
-/** A block found whole: its heading on one page, and each of its car numbers on that page. */
-function expectWholeBlock(pages: PdfPage[], heading: string, numbers: number[]) {
+/**
+ * A block kept whole where it can be: a block that fits in the page box (with 5 % to spare for
+ * rounding) is found on one page — its heading and every one of its car numbers; a taller one
+ * must run on, but each of its rows is whole (a car's number and its driver on one page).
+ */
+function expectWholeBlock(
+  { pages, heights }: Printed,
+  heading: string,
+  cars: { number: number; driver: string }[],
+) {
   const at = pagesWith(pages, heading);
   expect(at, `heading "${heading}"`).toHaveLength(1);
-  for (const n of numbers) {
-    expect(pagesWithNumber(pages, n), `car ${n} under "${heading}"`).toContain(at[0]);
+  const height = heights.get(heading);
+  expect(height, `block "${heading}" measured`).toBeDefined();
+  const fits = (height ?? Infinity) <= CONTENT_PX.height * 0.95;
+  for (const car of cars) {
+    const numberAt = pagesWithNumber(pages, car.number);
+    if (fits) expect(numberAt, `car ${car.number} under "${heading}"`).toContain(at[0]);
+    const rowPage = pages[numberAt.find((i) => i >= (at[0] ?? 0)) ?? -1];
+    expect(rowPage && squeezed(rowPage), `row of car ${car.number}`).toContain(squeeze(car.driver));
   }
+  return fits;
 }
 
 const count = (n: number) => `${n} ${n === 1 ? "car" : "cars"}`;
@@ -133,7 +171,8 @@ test("the tech results print on A4, one whole block per class, every car, provis
   await expect(
     page.getByRole("heading", { level: 1, name: "Tech results by class" }),
   ).toBeVisible();
-  const pages = await printed(page, "tech-results");
+  const print = await printed(page, "tech-results");
+  const { pages } = print;
   // Enough cars for more than one page, so keeping blocks whole is put to the test.
   expect(pages.length).toBeGreaterThan(1);
   const all = pages.map(squeezed).join("");
@@ -144,21 +183,17 @@ test("the tech results print on A4, one whole block per class, every car, provis
   for (const car of facts.cars)
     expect(pagesWithNumber(pages, car.car_number), `car ${car.car_number}`).not.toEqual([]);
   const runs = (c: Car) => c.status === "cleared" || c.status === "moved-up";
+  const rows = (cars: Car[]) => cars.map((c) => ({ number: c.car_number, driver: c.driver }));
+  const whole: boolean[] = [];
   for (const cls of facts.classes) {
     const inClass = facts.cars.filter((c) => runs(c) && c.final_class === cls.id);
-    expectWholeBlock(
-      pages,
-      `${cls.name} — ${count(inClass.length)}`,
-      inClass.map((c) => c.car_number),
-    );
+    whole.push(expectWholeBlock(print, `${cls.name} — ${count(inClass.length)}`, rows(inClass)));
   }
   const held = facts.cars.filter((c) => c.status === "held");
   expect(held.length).toBeGreaterThan(0);
-  expectWholeBlock(
-    pages,
-    `Held — ${count(held.length)}`,
-    held.map((c) => c.car_number),
-  );
+  whole.push(expectWholeBlock(print, `Held — ${count(held.length)}`, rows(held)));
+  // The check is not empty: some blocks fit a page and were held to it.
+  expect(whole.filter(Boolean).length).toBeGreaterThan(1);
   // Who moved up, and why: each moved-up car's reason is printed.
   for (const car of facts.cars.filter((c) => c.status === "moved-up")) {
     expect(all).toContain(squeeze(car.reason ?? "no reason"));
@@ -176,7 +211,8 @@ test("the chief scrutineer's report prints every car examined with each rejectio
   await expect(
     page.getByRole("heading", { level: 1, name: "Cars examined at the tech line" }),
   ).toBeVisible();
-  const pages = await printed(page, "chief-report");
+  const print = await printed(page, "chief-report");
+  const { pages } = print;
   const all = pages.map(squeezed).join("");
   // Source: Motorsport UK NCR 2026 Ch.5 Part A App.6 Art.3.1 — all cars examined, with reasons
   // for each rejection, reported to the clerk of the course.
@@ -272,7 +308,8 @@ test("the run sheet prints on A4, one whole block per group, with local times an
     const { context, page } = await signedIn(browser, demo.clerk);
     await page.goto(`/clerk/${facts.eventId}/print/run-sheet`);
     await expect(page.getByTestId("print-standing")).toContainText(`Version ${version}, published`);
-    const pages = await printed(page, "run-sheet");
+    const print = await printed(page, "run-sheet");
+    const { pages } = print;
     expect(pages.length).toBeGreaterThan(1);
     const all = pages.map(squeezed).join("");
     expect(all).toContain(squeeze(`Version ${version}, published`));
@@ -285,9 +322,13 @@ test("the run sheet prints on A4, one whole block per group, with local times an
         hourCycle: "h23",
       }).format(new Date(iso));
     groups.forEach((g, i) => {
-      const numbers = g.driveIds.map((id) => drives.find((d) => d.driveId === id)?.carNumber ?? -1);
-      expectWholeBlock(pages, `${g.name} — ${count(numbers.length)}`, numbers);
-      const [at] = pagesWith(pages, `${g.name} — ${count(numbers.length)}`);
+      const inGroup = g.driveIds.flatMap((id) => {
+        const d = drives.find((x) => x.driveId === id);
+        return d ? [{ number: d.carNumber, driver: d.driverName }] : [];
+      });
+      // Eight cars to a group fit a page: every group is found whole.
+      expect(expectWholeBlock(print, `${g.name} — ${count(inGroup.length)}`, inGroup)).toBe(true);
+      const [at] = pagesWith(pages, `${g.name} — ${count(inGroup.length)}`);
       for (const s of sessions.filter((x) => x.groupIndex === i + 1)) {
         expect(squeezed(pages[at ?? -1] as PdfPage)).toContain(
           squeeze(`Round ${s.round} ${hhmm(s.startsAt)}–${hhmm(s.endsAt)}`),

@@ -1,5 +1,4 @@
 import type { TechResultCar, TechResults } from "@/lib/results/shape-tech-results";
-import { verdictLabels } from "@/lib/verdict-word";
 import { PrintBlock } from "./print-block";
 import { PrintCarNumber } from "./print-car-number";
 
@@ -73,7 +72,9 @@ function CarRows({ rows }: { rows: TechResultCar[] }) {
 }
 
 function stateLine(car: TechResultCar): string {
-  if (car.state === "moved-up") return `Moved up from ${car.declaredClass}:`;
+  // A moved-up, held or waiting car's reason starts with its state ("Moves up from Kestrel to
+  // Merlin — …", "Held — …"): the bold line only adds what the reason does not say.
+  if (car.state === "moved-up") return "Moved up:";
   if (car.state === "cleared") return `Cleared in ${car.runsIn ?? car.declaredClass}.`;
-  return `${verdictLabels[car.state]} (entered in ${car.declaredClass}):`;
+  return `Entered in ${car.declaredClass}:`;
 }

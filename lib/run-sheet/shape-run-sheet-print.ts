@@ -96,6 +96,6 @@ export function shapeRunSheetPrint(publication: RunSheetPublication): RunSheetPr
         return p ? [p] : [];
       }),
     notes: sheet.gaveWay.map((g) => g.text),
-    cap: `${sheet.cap.cars} cars per group at most (${sheet.cap.source})`,
+    cap: `Cars per group at most: ${sheet.cap.source}`,
   };
 }
