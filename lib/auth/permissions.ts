@@ -10,6 +10,9 @@ export type Permission =
   | "entries.manage"
   | "registration.check"
   | "tech.read"
+  /** The chief scrutineer's report of every car examined, with each rejection: written for the
+   *  clerk of course (Motorsport UK NCR 2026 Ch.5 Part A App.6 Art.3.1). */
+  | "tech-report.read"
   | "readings.write"
   | "records.void"
   | "verdicts.override"
@@ -37,11 +40,13 @@ export const rolePermissions: Record<Role, readonly Permission[]> = {
     "readings.write",
     "records.void",
     "verdicts.override",
+    "tech-report.read",
   ],
   scrutineer: [...official, "tech.read", "readings.write"],
   "clerk-of-course": [
     ...official,
     "tech.read",
+    "tech-report.read",
     "run-groups.write",
     "run-groups.publish",
     "results.publish",

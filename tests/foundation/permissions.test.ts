@@ -11,6 +11,16 @@ describe("the permission table", () => {
     expect(eventRoles.filter((r) => can([r], "records.void"))).toEqual(["chief-scrutineer"]);
   });
 
+  it("gives the chief scrutineer's report to the chief scrutineer and the clerk of course only", () => {
+    // Source: Motorsport UK National Competition Rules 2026, Ch.5 Part A App.6 Art.3.1 — the chief
+    // scrutineer reports all cars examined, with reasons for each rejection, to the clerk of the course.
+    expect(eventRoles.filter((r) => can([r], "tech-report.read"))).toEqual([
+      "chief-scrutineer",
+      "clerk-of-course",
+    ]);
+    expect(can(["entrant"], "tech-report.read")).toBe(false);
+  });
+
   it("lets scrutineers record readings but not publish run groups", () => {
     // common practice (no source): scrutineers measure; the clerk of course runs the groups.
     expect(can(["scrutineer"], "readings.write")).toBe(true);

@@ -9,7 +9,11 @@ import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { signPass } from "@/lib/passes/sign-pass";
 import { actionOutcome, callServerAction, listServerActions } from "../support/call-server-action";
 import type { HttpSession } from "../support/http-session";
-import { listRouteHandlers, listServerActionSources } from "../support/list-app-endpoints";
+import {
+  listPrintPages,
+  listRouteHandlers,
+  listServerActionSources,
+} from "../support/list-app-endpoints";
 import {
   type CallerName,
   callerNames,
@@ -138,6 +142,25 @@ const routes: Record<string, Row> = {
     ),
   },
   "GET /api/health": { expect: all(200), call: get(() => "/api/health") },
+  // Exports (issue 10): the tech results for every official; the chief scrutineer's report for
+  // the chief scrutineer and the clerk of course (Motorsport UK NCR 2026 Ch.5 Part A App.6 Art.3.1).
+  "GET /api/events/[eventId]/tech-results/csv": {
+    expect: only(200, ...officials),
+    call: get((c) => `/api/events/${c.eventId}/tech-results/csv`),
+  },
+  "GET /api/events/[eventId]/chief-report/csv": {
+    expect: only(200, "chief", "clerk"),
+    call: get((c) => `/api/events/${c.eventId}/chief-report/csv`),
+  },
+  "GET /api/events/[eventId]/run-sheet/csv": {
+    // Allowed callers get the latest run sheet, or 404 ("none published yet") when no test file
+    // has published one: both mean the guard let them through.
+    expect: only(200, ...officials),
+    call: async (s, c) => {
+      const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
+      return status === 404 ? 200 : status;
+    },
+  },
 };
 
 // A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
@@ -256,6 +279,23 @@ const actions: Record<string, Row> = {
   },
 };
 
+// Print layouts: pages, checked by the page itself (loadEventPage); proxy.ts sends a signed-out
+// visitor to sign in first.
+const printPages: Record<string, Row> = {
+  "/tech/[eventId]/print/results": {
+    expect: signedInPage(only(200, ...officials)),
+    call: get((c) => `/tech/${c.eventId}/print/results`),
+  },
+  "/tech/[eventId]/print/chief-report": {
+    expect: signedInPage(only(200, "chief", "clerk")),
+    call: get((c) => `/tech/${c.eventId}/print/chief-report`),
+  },
+  "/clerk/[eventId]/print/run-sheet": {
+    expect: signedInPage(only(200, ...officials)),
+    call: get((c) => `/clerk/${c.eventId}/print/run-sheet`),
+  },
+};
+
 let ctx: Ctx;
 let sessions: Record<CallerName, HttpSession>;
 
@@ -306,7 +346,11 @@ describe("the authorization matrix", () => {
     expect([...listServerActions().keys()].sort()).toEqual(listServerActionSources());
   });
 
-  for (const [name, row] of Object.entries({ ...routes, ...actions })) {
+  it("has a row for every print layout in app/", () => {
+    expect(Object.keys(printPages).sort()).toEqual(listPrintPages());
+  });
+
+  for (const [name, row] of Object.entries({ ...routes, ...actions, ...printPages })) {
     it(name, async () => {
       const got: Partial<Expect> = {};
       for (const caller of callerNames) got[caller] = await row.call(sessions[caller], ctx);

@@ -46,3 +46,19 @@ export function listServerActionSources(): string[] {
   }
   return found.sort();
 }
+
+/** Every print layout in app/ (a page under a `print` segment), as "/path/[param]" (route groups
+ *  left out of the path). */
+export function listPrintPages(): string[] {
+  return walk(APP)
+    .filter((f) => /\/page\.tsx?$/.test(f))
+    .map((f) =>
+      path
+        .relative(APP, path.dirname(f))
+        .split(path.sep)
+        .filter((s) => s !== "" && !/^\(.*\)$/.test(s)),
+    )
+    .filter((segments) => segments.includes("print"))
+    .map((segments) => `/${segments.join("/")}`)
+    .sort();
+}

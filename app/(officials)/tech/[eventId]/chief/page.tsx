@@ -28,9 +28,29 @@ export default async function ChiefPage({ params }: { params: Promise<{ eventId:
   return (
     <div>
       <EventHeading roleLabel="Chief scrutineer" title="Cars that need your decision" event={event}>
-        <Link href={`/tech/${eventId}`} className="btn-secondary">
-          Whole tech line
-        </Link>
+        <div className="flex flex-wrap gap-3">
+          <Link href={`/tech/${eventId}`} className="btn-secondary">
+            Whole tech line
+          </Link>
+        </div>
+        <nav
+          className="flex flex-wrap gap-3"
+          aria-label="Reports for the clerk of course"
+          data-testid="chief-reports"
+        >
+          <Link href={`/tech/${eventId}/print/chief-report`} className="btn-secondary">
+            Your report to the clerk (print)
+          </Link>
+          <a href={`/api/events/${eventId}/chief-report/csv`} className="btn-secondary" download>
+            Your report (CSV)
+          </a>
+          <Link href={`/tech/${eventId}/print/results`} className="btn-secondary">
+            Tech results (print)
+          </Link>
+          <a href={`/api/events/${eventId}/tech-results/csv`} className="btn-secondary" download>
+            Tech results (CSV)
+          </a>
+        </nav>
       </EventHeading>
       <div className="space-y-4">
         <Caution title="Your call">
