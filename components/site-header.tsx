@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { shortPersonName } from "@/lib/auth/short-person-name";
+import { HideOnBoard } from "./hide-on-board";
 import { PlumbMark } from "./icons/plumb-mark";
 
 export function SiteHeader({
@@ -19,27 +20,29 @@ export function SiteHeader({
           <PlumbMark className="size-8 text-asphalt-50" />
           Plumbline
         </Link>
-        {userName && signOutAction ? (
-          <form action={signOutAction} className="flex min-w-0 items-center gap-3">
-            <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
-              <span className="sm:hidden">{shortPersonName(userName)}</span>
-              <span className="hidden sm:inline">{userName}</span>
-            </span>
-            <button
-              type="submit"
-              className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+        <HideOnBoard>
+          {userName && signOutAction ? (
+            <form action={signOutAction} className="flex min-w-0 items-center gap-3">
+              <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+                <span className="sm:hidden">{shortPersonName(userName)}</span>
+                <span className="hidden sm:inline">{userName}</span>
+              </span>
+              <button
+                type="submit"
+                className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+              >
+                Sign out
+              </button>
+            </form>
+          ) : (
+            <Link
+              href="/sign-in"
+              className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
             >
-              Sign out
-            </button>
-          </form>
-        ) : (
-          <Link
-            href="/sign-in"
-            className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
-          >
-            Sign in
-          </Link>
-        )}
+              Sign in
+            </Link>
+          )}
+        </HideOnBoard>
       </div>
     </header>
   );
