@@ -28,6 +28,8 @@ export type BoardDrive = {
   slot: 1 | 2;
   /** The car has two drives on this sheet (two drivers share it). */
   shared: boolean;
+  /** The car's verdict now; null when it has been withdrawn since the sheet was published. */
+  status: VerdictWord | null;
   /** Set when the car may no longer run as published (held, back at the tech line, withdrawn). */
   flag: BoardDriveFlag | null;
 };

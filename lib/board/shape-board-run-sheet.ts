@@ -1,3 +1,4 @@
+import { driveIdOf } from "../paddock/drive";
 import type { RunSheetPublication } from "../paddock/run-sheet-schema";
 import type { VerdictWord } from "../verdict-word";
 import type { BoardDrive, BoardRunSheet } from "./board-schema";
@@ -30,7 +31,8 @@ export function shapeBoardRunSheet({
     drives: group.driveIds.flatMap((driveId): BoardDrive[] => {
       const drive = byId.get(driveId);
       if (!drive) return [];
-      const slot = driveId.endsWith(":2") ? 2 : 1;
+      const slot = driveId === driveIdOf(drive.entryId, 2) ? 2 : 1;
+      const status = statusOf.get(drive.entryId) ?? null;
       return [
         {
           key: `${drive.carNumber}-${slot}`,
@@ -38,7 +40,8 @@ export function shapeBoardRunSheet({
           className: drive.className,
           slot,
           shared: (drivesOf.get(drive.entryId) ?? 0) > 1,
-          flag: driveFlag(statusOf.get(drive.entryId) ?? null),
+          status,
+          flag: driveFlag(status),
         },
       ];
     }),

@@ -1,0 +1,53 @@
+import { VerdictBadge } from "@/components/verdict-badge";
+import { verdictLook } from "@/components/verdict-look";
+import type { BoardCar } from "@/lib/board/board-schema";
+import { type VerdictWord, verdictLabels } from "@/lib/verdict-word";
+
+const order: VerdictWord[] = ["cleared", "moved-up", "re-measure", "held", "waiting"];
+
+/** Every car's state at the tech line, grouped by state; each tile carries its state's colour,
+ *  icon and word. Scrutineering only: it never says a car is ready to run. */
+export function TechStateBoard({ cars }: { cars: BoardCar[] }) {
+  return (
+    <section aria-label="Tech line" className="space-y-3" data-testid="tech-state">
+      <h2 className="text-2xl font-bold 2xl:text-3xl">Tech line</h2>
+      <p className="text-base" data-testid="board-scope">
+        Scrutineering only: “Cleared” means the car passed the tech line, not that it is ready to
+        run. A car also needs to be signed on (waiver and fee) before the clerk of course puts it in
+        a run group; the run sheet says who runs.
+      </p>
+      {order.map((status) => {
+        const group = cars.filter((c) => c.status === status);
+        if (group.length === 0) return null;
+        const look = verdictLook[status];
+        return (
+          <section key={status} aria-label={verdictLabels[status]} data-testid={`board-${status}`}>
+            <h3 className="mb-2 flex items-center gap-3 text-xl font-bold">
+              <VerdictBadge status={status} /> <span className="tabular">{group.length}</span>
+            </h3>
+            <ul className="grid grid-cols-3 gap-1.5 sm:grid-cols-6 lg:grid-cols-8 2xl:grid-cols-12">
+              {group.map((car) => (
+                <li
+                  key={car.carNumber}
+                  className={`flex min-w-0 flex-col rounded-lg border-2 px-2 py-1 text-center ${look.className}`}
+                  data-car-number={car.carNumber}
+                >
+                  <span className="tabular block font-narrow text-3xl font-bold 2xl:text-4xl">
+                    {car.carNumber}
+                  </span>
+                  <span className="block truncate text-base text-asphalt-900">
+                    {car.finalClass ?? car.declaredClass}
+                  </span>
+                  <span className="flex items-center justify-center gap-1 text-base font-semibold">
+                    {look.icon}
+                    <span className="whitespace-nowrap">{verdictLabels[status]}</span>
+                  </span>
+                </li>
+              ))}
+            </ul>
+          </section>
+        );
+      })}
+    </section>
+  );
+}
