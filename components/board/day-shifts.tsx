@@ -1,7 +1,7 @@
 import type { BoardShift } from "@/lib/board/board-day";
 
 const lead: Record<BoardShift["kind"], string> = {
-  "red-flag": "Red flag",
+  "red-flag": "Stopped",
   "cut-short": "Cut short",
   late: "Late",
 };

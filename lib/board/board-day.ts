@@ -8,7 +8,8 @@ import { formatBoardTime } from "./format-board-time";
 /** A session with its group, as one panel of the board shows it. */
 export type BoardSlot = { session: LiveSession; group: BoardGroup };
 
-/** One line of "the day's shifts": what the clerk of course marked, or where a delay began. */
+/** One line of "the day's changes": a red flag, a session cut short (each with the clerk's
+ *  note), or the session where a delay began or grew. */
 export type BoardShift = {
   key: string;
   kind: "red-flag" | "cut-short" | "late";
@@ -58,19 +59,34 @@ export function boardDay({
   let shownDelay = 0;
   for (const s of live) {
     const groupName = runSheet.groups[s.groupIndex - 1]?.name ?? `Group ${s.groupIndex}`;
-    const base = { groupName, round: s.round, note: s.note };
-    if (s.state === "red-flag")
+    const base = { groupName, round: s.round };
+    // Every red flag of the session, with how long it stopped the track and the clerk's note.
+    const marks = calls.filter((c) => c.sessionKey === s.key);
+    marks.forEach((mark, i) => {
+      if (mark.state !== "red-flag" || marks[i - 1]?.state === "red-flag") return;
+      const resumed = marks
+        .slice(i + 1)
+        .find((m) => m.state !== "red-flag" && m.state !== "called");
+      const stoppedMin = resumed
+        ? Math.round((Date.parse(resumed.at) - Date.parse(mark.at)) / 60_000)
+        : null;
       shifts.push({
         ...base,
-        key: `${s.key}-red`,
+        key: `${s.key}-red-${i}`,
         kind: "red-flag",
-        words: `Stopped under a red flag (on track from ${time(s.expectedStartsAt)})`,
+        note: mark.note,
+        words:
+          stoppedMin === null
+            ? `Red flag at ${time(mark.at)}, track stopped now`
+            : `Red flag at ${time(mark.at)}, track stopped ${stoppedMin} min`,
       });
-    else if (s.state === "cut-short")
+    });
+    if (s.state === "cut-short")
       shifts.push({
         ...base,
         key: `${s.key}-cut`,
         kind: "cut-short",
+        note: s.note,
         words: `Cut short at ${time(s.expectedEndsAt)} (planned to ${time(s.endsAt)})`,
       });
     // A delay is told once, where it begins or grows; the sessions behind carry it in their times.
@@ -79,7 +95,7 @@ export function boardDay({
         ...base,
         key: `${s.key}-late`,
         kind: "late",
-        note: s.state === "red-flag" || s.state === "cut-short" ? null : s.note,
+        note: null,
         words: `${s.shiftedMinutes} min late: ${time(s.expectedStartsAt)} instead of ${time(s.startsAt)}`,
       });
     shownDelay = Math.max(0, s.shiftedMinutes);
