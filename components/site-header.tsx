@@ -2,6 +2,7 @@ import Link from "next/link";
 import { shortPersonName } from "@/lib/auth/short-person-name";
 import { HideOnBoard } from "./hide-on-board";
 import { PlumbMark } from "./icons/plumb-mark";
+import { SiteHeaderRow } from "./site-header-row";
 
 export function SiteHeader({
   userName,
@@ -12,7 +13,7 @@ export function SiteHeader({
 }) {
   return (
     <header className="border-b-4 border-accent bg-asphalt-950 text-asphalt-50">
-      <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
+      <SiteHeaderRow>
         <Link
           href={userName ? "/home" : "/"}
           className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-wide"
@@ -43,7 +44,7 @@ export function SiteHeader({
             </Link>
           )}
         </HideOnBoard>
-      </div>
+      </SiteHeaderRow>
     </header>
   );
 }

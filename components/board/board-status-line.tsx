@@ -7,15 +7,21 @@ export function BoardStatusLine({ ageMs, unreachable }: { ageMs: number; unreach
   const words = lastHeardWords(ageMs);
   return (
     <p
-      className={`inline-flex items-center gap-2 rounded-lg border-2 px-3 py-1 text-lg font-semibold 2xl:text-2xl ${unreachable ? "border-attention-line bg-attention-soft text-attention" : "border-cleared-line bg-cleared-soft text-cleared"}`}
+      className={`flex w-fit items-center gap-2 rounded-lg border-2 px-3 py-1 text-lg font-semibold 2xl:text-2xl ${unreachable ? "border-attention-line bg-attention-soft text-attention" : "border-cleared-line bg-cleared-soft text-cleared"}`}
       data-testid="board-heard"
       data-unreachable={unreachable}
     >
-      {unreachable ? <AttentionIcon /> : <ClearedIcon />}
-      <span aria-live="polite">
-        {unreachable ? "No signal: showing the board as last heard. " : "Live. "}
+      {unreachable ? (
+        <AttentionIcon className="size-6 shrink-0" />
+      ) : (
+        <ClearedIcon className="size-6 shrink-0" />
+      )}
+      <span>
+        <span aria-live="polite">
+          {unreachable ? "No signal: showing the board as last heard. " : "Live. "}
+        </span>
+        {words}
       </span>
-      <span>{words}</span>
     </p>
   );
 }

@@ -89,10 +89,12 @@ export function PaddockBoard({ eventId }: { eventId: string }) {
           run: below is where each car stands at the tech line.
         </p>
       )}
-      <Caution>
-        The run sheet as published by the clerk of course governs, and the chief scrutineer has the
-        final say on every car. Listen for calls at the dummy grid; this board can lag.
-      </Caution>
+      <div className="2xl:[&_aside>div]:text-xl">
+        <Caution>
+          The run sheet as published by the clerk of course governs, and the chief scrutineer has
+          the final say on every car. Listen for calls at the dummy grid; this board can lag.
+        </Caution>
+      </div>
       {day && board.runSheet ? (
         <RunSheetGroups
           runSheet={board.runSheet}

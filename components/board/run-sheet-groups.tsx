@@ -62,7 +62,7 @@ export function RunSheetGroups({
                   </li>
                 ))}
               </ul>
-              <ul className="grid grid-cols-3 gap-1.5 sm:grid-cols-5">
+              <ul className="grid grid-cols-[repeat(auto-fill,minmax(5.5rem,1fr))] gap-1.5">
                 {group.drives.map((drive) => (
                   <DriveTile key={drive.key} drive={drive} size="small" />
                 ))}

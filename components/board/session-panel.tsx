@@ -24,6 +24,8 @@ export function SessionPanel({
   emphasis: boolean;
 }) {
   const flagged = slot ? slot.group.drives.filter((d) => d.flag) : [];
+  // A big group (a long track allows 20 and more) goes six to a row on a TV, so it still fits.
+  const dense = (slot?.group.drives.length ?? 0) > 15;
   return (
     <section
       aria-label={label}
@@ -52,9 +54,11 @@ export function SessionPanel({
               Clerk’s note: {slot.session.note}
             </p>
           ) : null}
-          <ul className="grid grid-cols-3 gap-1.5 sm:grid-cols-4 2xl:grid-cols-4 2xl:gap-2">
+          <ul
+            className={`grid grid-cols-[repeat(auto-fill,minmax(5.5rem,1fr))] gap-1.5 2xl:gap-2 ${dense ? "2xl:grid-cols-6" : slot.group.drives.length > 8 ? "2xl:grid-cols-5" : "2xl:grid-cols-4"}`}
+          >
             {slot.group.drives.map((drive) => (
-              <DriveTile key={drive.key} drive={drive} size="large" />
+              <DriveTile key={drive.key} drive={drive} size={dense ? "small" : "large"} />
             ))}
           </ul>
           {flagged.length > 0 ? (

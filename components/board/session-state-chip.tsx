@@ -11,7 +11,7 @@ const chips: Record<
   { word: string; className: string; icon: React.ReactNode }
 > = {
   planned: {
-    word: "As planned",
+    word: "Not called yet",
     className: "bg-asphalt-100 text-asphalt-900 border-asphalt-400",
     icon: <WaitingIcon />,
   },

@@ -2,6 +2,7 @@ import { VerdictBadge } from "@/components/verdict-badge";
 import { verdictLook } from "@/components/verdict-look";
 import type { BoardCar } from "@/lib/board/board-schema";
 import { type VerdictWord, verdictLabels } from "@/lib/verdict-word";
+import { StateTile } from "./state-tile";
 
 const order: VerdictWord[] = ["cleared", "moved-up", "re-measure", "held", "waiting"];
 
@@ -25,24 +26,16 @@ export function TechStateBoard({ cars }: { cars: BoardCar[] }) {
             <h3 className="mb-2 flex items-center gap-3 text-xl font-bold">
               <VerdictBadge status={status} /> <span className="tabular">{group.length}</span>
             </h3>
-            <ul className="grid grid-cols-3 gap-1.5 sm:grid-cols-6 lg:grid-cols-8 2xl:grid-cols-12">
+            <ul className="grid grid-cols-[repeat(auto-fill,minmax(5.5rem,1fr))] gap-1.5 2xl:grid-cols-12">
               {group.map((car) => (
-                <li
+                <StateTile
                   key={car.carNumber}
-                  className={`flex min-w-0 flex-col rounded-lg border-2 px-2 py-1 text-center ${look.className}`}
-                  data-car-number={car.carNumber}
-                >
-                  <span className="tabular block font-narrow text-3xl font-bold 2xl:text-4xl">
-                    {car.carNumber}
-                  </span>
-                  <span className="block truncate text-base text-asphalt-900">
-                    {car.finalClass ?? car.declaredClass}
-                  </span>
-                  <span className="flex items-center justify-center gap-1 text-base font-semibold">
-                    {look.icon}
-                    <span className="whitespace-nowrap">{verdictLabels[status]}</span>
-                  </span>
-                </li>
+                  carNumber={car.carNumber}
+                  className={car.finalClass ?? car.declaredClass}
+                  look={{ ...look, word: verdictLabels[status] }}
+                  size="small"
+                  state={status}
+                />
               ))}
             </ul>
           </section>
