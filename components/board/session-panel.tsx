@@ -24,7 +24,7 @@ export function SessionPanel({
   emphasis: boolean;
 }) {
   const flagged = slot ? slot.group.drives.filter((d) => d.flag) : [];
-  // A big group (a long track allows 20 and more) goes six to a row on a TV, so it still fits.
+  // A big group (a long track allows 20 and more) goes five to a row in smaller type on a TV.
   const dense = (slot?.group.drives.length ?? 0) > 15;
   return (
     <section
@@ -55,7 +55,7 @@ export function SessionPanel({
             </p>
           ) : null}
           <ul
-            className={`grid grid-cols-[repeat(auto-fill,minmax(5.5rem,1fr))] gap-1.5 2xl:gap-2 ${dense ? "2xl:grid-cols-6" : slot.group.drives.length > 8 ? "2xl:grid-cols-5" : "2xl:grid-cols-4"}`}
+            className={`grid grid-cols-[repeat(auto-fill,minmax(5.5rem,1fr))] gap-1.5 2xl:gap-2 ${dense ? "2xl:grid-cols-5" : "2xl:grid-cols-4"}`}
           >
             {slot.group.drives.map((drive) => (
               <DriveTile key={drive.key} drive={drive} size={dense ? "small" : "large"} />

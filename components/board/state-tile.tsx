@@ -2,8 +2,9 @@ import type { ReactNode } from "react";
 
 /**
  * A car's tile: its number large with the state's icon beside it, then its class, the state's
- * word and any extra line, all on the state's colours (DESIGN.md: never colour alone). Each line
- * fits a third of a phone's width: the icon rides with the number, not with the word.
+ * word and any extra line, all on the state's colours (DESIGN.md: never colour alone). The icon
+ * rides with the number, so the word has the tile's width; a word longer than that (Re-measure on
+ * a phone) breaks at its hyphen rather than running past the edge.
  */
 export function StateTile({
   carNumber,
@@ -47,13 +48,17 @@ export function StateTile({
           {look.icon}
         </span>
       </span>
-      {extra ? <span className="truncate text-base font-semibold">{extra}</span> : null}
+      {extra ? (
+        <span className="break-words text-base font-semibold leading-tight">{extra}</span>
+      ) : null}
       <span
-        className={`truncate font-semibold text-asphalt-900 ${large ? "text-base 2xl:text-xl" : "text-base"}`}
+        className={`break-words font-semibold leading-tight text-asphalt-900 ${large ? "text-base 2xl:text-xl" : "text-base"}`}
       >
         {className}
       </span>
-      <span className={`truncate font-semibold ${large ? "text-base 2xl:text-xl" : "text-base"}`}>
+      <span
+        className={`break-words font-semibold leading-tight ${large ? "text-base 2xl:text-xl" : "text-base"}`}
+      >
         {look.word}
       </span>
     </li>
