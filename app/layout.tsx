@@ -7,6 +7,7 @@ import type { Metadata, Viewport } from "next";
 import type { ReactNode } from "react";
 import { SiteFooter } from "@/components/site-footer";
 import { SiteHeader } from "@/components/site-header";
+import { SiteMain } from "@/components/site-main";
 import { getSessionUser } from "@/lib/auth/get-session-user";
 import { Providers } from "./providers";
 import { signOutAction } from "./sign-out-action";
@@ -30,9 +31,9 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
           userName={user ? (user.name ?? user.email) : null}
           signOutAction={signOutAction}
         />
-        <main className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+        <SiteMain>
           <Providers>{children}</Providers>
-        </main>
+        </SiteMain>
         <SiteFooter />
       </body>
     </html>

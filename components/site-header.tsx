@@ -1,6 +1,8 @@
 import Link from "next/link";
 import { shortPersonName } from "@/lib/auth/short-person-name";
+import { HideOnBoard } from "./hide-on-board";
 import { PlumbMark } from "./icons/plumb-mark";
+import { SiteHeaderRow } from "./site-header-row";
 
 export function SiteHeader({
   userName,
@@ -11,7 +13,7 @@ export function SiteHeader({
 }) {
   return (
     <header className="border-b-4 border-accent bg-asphalt-950 text-asphalt-50">
-      <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
+      <SiteHeaderRow>
         <Link
           href={userName ? "/home" : "/"}
           className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-wide"
@@ -19,28 +21,30 @@ export function SiteHeader({
           <PlumbMark className="size-8 text-asphalt-50" />
           Plumbline
         </Link>
-        {userName && signOutAction ? (
-          <form action={signOutAction} className="flex min-w-0 items-center gap-3">
-            <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
-              <span className="sm:hidden">{shortPersonName(userName)}</span>
-              <span className="hidden sm:inline">{userName}</span>
-            </span>
-            <button
-              type="submit"
-              className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+        <HideOnBoard>
+          {userName && signOutAction ? (
+            <form action={signOutAction} className="flex min-w-0 items-center gap-3">
+              <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+                <span className="sm:hidden">{shortPersonName(userName)}</span>
+                <span className="hidden sm:inline">{userName}</span>
+              </span>
+              <button
+                type="submit"
+                className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+              >
+                Sign out
+              </button>
+            </form>
+          ) : (
+            <Link
+              href="/sign-in"
+              className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
             >
-              Sign out
-            </button>
-          </form>
-        ) : (
-          <Link
-            href="/sign-in"
-            className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
-          >
-            Sign in
-          </Link>
-        )}
-      </div>
+              Sign in
+            </Link>
+          )}
+        </HideOnBoard>
+      </SiteHeaderRow>
     </header>
   );
 }

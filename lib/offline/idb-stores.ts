@@ -7,6 +7,7 @@ export const IDB_STORE_NAMES = {
   records: { database: "plumbline-records", store: "records" },
   blobs: { database: "plumbline-blobs", store: "blobs" },
   meta: { database: "plumbline-meta", store: "meta" },
+  boards: { database: "plumbline-boards", store: "boards" },
 } as const;
 
 let stores: { packs: UseStore; records: UseStore; blobs: UseStore; meta: UseStore } | undefined;
