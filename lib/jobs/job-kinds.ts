@@ -20,6 +20,17 @@ export const sendMailPayload = z.object({
   /** Made when the mail is queued, so every attempt (and a restored backup's new jobs) carries
    *  its own Message-ID, the same on each try. */
   messageId: z.string().optional(),
+  /** Small files sent with the mail (an iCalendar file of the entrant's sessions). */
+  attachments: z
+    .array(
+      z.object({
+        filename: z.string().max(120),
+        contentType: z.string().max(120),
+        content: z.string().max(200_000),
+      }),
+    )
+    .max(3)
+    .optional(),
 });
 
 export type SendMailPayload = z.infer<typeof sendMailPayload>;

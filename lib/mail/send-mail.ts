@@ -13,6 +13,7 @@ export type OutgoingMail = {
   eventId?: string | null;
   /** A Message-ID made when the mail was queued (the same on every attempt). */
   messageId?: string;
+  attachments?: { filename: string; contentType: string; content: string }[];
 };
 
 /**
@@ -36,6 +37,7 @@ export async function sendMail(
       text: mail.text,
       html: mail.html,
       ...(messageId ? { messageId } : {}),
+      ...(mail.attachments ? { attachments: mail.attachments } : {}),
     });
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);

@@ -3,6 +3,7 @@ import { createHash } from "node:crypto";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { listEntryContacts } from "../../db/queries/list-entry-contacts";
+import { listOpenReinspections } from "../../db/queries/reinspections/list-open-reinspections";
 import { saveVerdicts } from "../../db/queries/save-verdicts";
 import { runTransaction } from "../../db/run-transaction";
 import { withNamedLock } from "../../db/with-named-lock";
@@ -10,9 +11,11 @@ import { clock } from "../clock";
 import { env } from "../env";
 import { AppError } from "../errors";
 import { stableStringify } from "../scrutineer/records/stable-stringify";
+import { applyReinspection } from "../scrutineer/verdicts/apply-reinspection";
 import { evaluateEntry } from "../scrutineer/verdicts/evaluate-entry";
 import { uncomputedVerdict } from "../scrutineer/verdicts/uncomputed-verdict";
 import type { Verdict, VerdictStatus } from "../scrutineer/verdicts/verdict-schema";
+import { formatClockTime } from "./format-clock-time";
 import { loadEvaluationEntries } from "./load-evaluation-entries";
 import { needsChiefScrutineer } from "./needs-chief-scrutineer";
 import { verdictChangeMails } from "./verdict-change-mails";
@@ -48,10 +51,25 @@ export async function recomputeVerdicts({
     const context = await getEventRuleSet({ eventId });
     if (!context) throw new AppError("not_found", "No such event.");
     const inputs = await loadEvaluationEntries({ context, entryIds });
+    // A car sent back for re-inspection waits until the chief scrutineer closes it.
+    const reinspections = new Map(
+      (await listOpenReinspections({ eventId, entryIds })).map((r) => [r.entryId, r]),
+    );
     const results = inputs.map((entryInput) => {
       const input = { ...entryInput, ruleSet: context.ruleSet };
+      const open = reinspections.get(input.entry.entryId);
       try {
-        return { entryId: input.entry.entryId, verdict: evaluateEntry(input) };
+        const computed = evaluateEntry(input);
+        const verdict = applyReinspection(
+          computed,
+          open
+            ? {
+                ...open,
+                askedAtText: formatClockTime(open.askedAt, context.timeZone).slice(0, 5),
+              }
+            : null,
+        );
+        return { entryId: input.entry.entryId, verdict };
       } catch (error) {
         const problem = error instanceof Error ? error.message : String(error);
         console.error(

@@ -147,6 +147,7 @@ export function evaluateEntry(input: EvaluateEntryInput): Verdict {
     flags: VERDICT_FLAGS.filter((f) => flags.has(f)),
     override: final.override,
     rejectedOverride: final.rejectedOverride,
+    reinspection: null,
     classChecks,
     eventRules: eventRules.map((r) => ({
       ...r,

@@ -27,6 +27,7 @@ export function uncomputedVerdict(
     flags: ["not-computed"],
     override: null,
     rejectedOverride: null,
+    reinspection: null,
     classChecks: [],
     eventRules: [],
     safety: [],

@@ -22,6 +22,7 @@ export const VERDICT_FLAGS = [
   "unknown-checklist-item",
   "implausible-reading",
   "not-computed",
+  "reinspection",
 ] as const;
 /** One of {@link VERDICT_FLAGS}. */
 export type VerdictFlag = (typeof VERDICT_FLAGS)[number];
@@ -192,6 +193,20 @@ export const verdictSchema = z.object({
       status: z.enum(["cleared", "moved-up", "held"]),
       classId: z.string().nullable(),
       problem: z.string(),
+    })
+    .nullable()
+    .default(null),
+  /** An open re-inspection (after an incident or a protest): the car waits until the chief
+   *  scrutineer closes it; what the records alone say stays in `computedStatus`. */
+  reinspection: z
+    .object({
+      cause: z.enum(["incident", "protest", "other"]),
+      askedBy: z.string(),
+      askedAt: z.string(),
+      reason: z.string(),
+      computedStatus: z.enum(VERDICT_STATUSES),
+      computedClassId: z.string().nullable(),
+      computedReason: z.string(),
     })
     .nullable()
     .default(null),
