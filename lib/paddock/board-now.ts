@@ -48,5 +48,6 @@ export function boardNow({ live, now }: { live: readonly LiveSession[]; now: str
   const waiting = ordered.filter(
     (s, i) => !over(s) && !inProgress(s) && (i >= from || s.state === "called"),
   );
+  waiting.sort((a, b) => Number(b.state === "called") - Number(a.state === "called"));
   return { onTrack, next: waiting[0] ?? null, after: waiting[1] ?? null };
 }
