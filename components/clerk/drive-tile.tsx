@@ -3,7 +3,7 @@ import { useDraggable } from "@dnd-kit/core";
 import type { Drive } from "@/lib/paddock/drive";
 import { CarNumberChip } from "../car-number-chip";
 import { StoppedIcon } from "../icons/state-icons";
-import { formatLapTime } from "./format-lap-time";
+import { formatLapEstimate } from "./format-lap-estimate";
 
 const experienceLabel: Record<Drive["experience"], string> = {
   novice: "Novice",
@@ -63,7 +63,7 @@ export function DriveTile({
           <span className="block truncate text-lg font-semibold">{drive.driverName}</span>
           <span className="block text-base text-asphalt-800">
             {drive.className} · {experienceLabel[drive.experience]} ·{" "}
-            <span className="tabular">{formatLapTime(drive.lapTimeMs)}</span>
+            <span className="tabular">{formatLapEstimate(drive.lapTimeMs)}</span>
           </span>
         </span>
       </button>

@@ -19,7 +19,7 @@ export function drive(entry: number, slot: 1 | 2, overrides: Partial<Drive> = {}
   };
 }
 
-/** Cars 1–6, car 3 shared by two drivers (3:1 in Group 1, 3:2 in Group 2). */
+/** Cars 1–6, car 3 shared by two drivers (3:1 in Group 1, 3:2 in Group 3: not back to back). */
 export const drives: Drive[] = [
   drive(1, 1),
   drive(2, 1),
@@ -32,6 +32,6 @@ export const drives: Drive[] = [
 
 export const groups: RunGroup[] = [
   { name: "Group 1", driveIds: ["e1:1", "e2:1", "e3:1"] },
-  { name: "Group 2", driveIds: ["e3:2", "e4:1"] },
-  { name: "Group 3", driveIds: ["e5:1", "e6:1"] },
+  { name: "Group 2", driveIds: ["e4:1", "e5:1"] },
+  { name: "Group 3", driveIds: ["e3:2", "e6:1"] },
 ];

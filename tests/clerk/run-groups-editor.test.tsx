@@ -39,8 +39,8 @@ describe("the clerk moves cars and groups without dragging", () => {
     const [next, what] = onChange.mock.calls[0] as [RunGroup[], string];
     expect(next.map((g) => g.driveIds)).toEqual([
       ["e1:1", "e3:1"],
-      ["e3:2", "e4:1"],
-      ["e5:1", "e6:1", "e2:1"],
+      ["e4:1", "e5:1"],
+      ["e3:2", "e6:1", "e2:1"],
     ]);
     expect(what).toBe("Car 2 moved to Group 3");
     expect(screen.queryByTestId("move-choices")).toBeNull();
@@ -68,7 +68,7 @@ describe("the clerk moves cars and groups without dragging", () => {
     await userEvent.click(screen.getByRole("button", { name: "Run Group 3 earlier" }));
     const [next, what] = onChange.mock.calls[0] as [RunGroup[], string];
     expect(next.map((g) => g.name)).toEqual(["Group 1", "Group 3", "Group 2"]);
-    expect(next[1]?.driveIds).toEqual(["e5:1", "e6:1"]);
+    expect(next[1]?.driveIds).toEqual(["e3:2", "e6:1"]);
     expect(what).toBe("Group 3 now runs earlier");
   });
 });
