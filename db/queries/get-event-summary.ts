@@ -21,6 +21,9 @@ export async function getEventSummary({ eventId }: { eventId: string }) {
       ruleSetVersion: ruleSetVersions.version,
       venueName: venues.name,
       trackLengthM: venues.trackLengthM,
+      maxCarsOnTrack: venues.maxCarsOnTrack,
+      carsPerKm: venues.carsPerKm,
+      protestWindowMinutes: events.protestWindowMinutes,
       clubName: clubs.name,
     })
     .from(events)

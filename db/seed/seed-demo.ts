@@ -74,6 +74,9 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     );
   }
   const rnd = createPrng(20270417);
+  // Experience and the co-driver's pace come from their own sequence, so the cars, classes and
+  // readings drawn from `rnd` stay as they were before drivers declared experience.
+  const pace = createPrng(20270418);
   const now = new Date();
   const eventDate = nextSaturday(opts.today);
   const clubId = uuidv7();
@@ -143,6 +146,9 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
         driverId,
         coDriverId: first ? (userIds.codriver ?? null) : null,
         lapTimeEstimateMs: lapEstimateMs(plan.classId, rnd.next()),
+        driverExperience: pace.pick(demoExperience),
+        coDriverExperience: first ? "novice" : null,
+        coDriverLapTimeEstimateMs: first ? 118_000 + pace.int(0, 6_000) : null,
         declarations: demoDeclarations(plan.classId, rnd.next(), eventDate),
         status: "entered",
         createdAt: now,
@@ -226,6 +232,18 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
 
   return { eventId, entryIds: entryRows.map((e) => e.id as string), userIds };
 }
+
+/** Drivers' experience in the demo: more novices and intermediates than experts, as at a club day. */
+const demoExperience = [
+  "novice",
+  "novice",
+  "intermediate",
+  "intermediate",
+  "intermediate",
+  "advanced",
+  "advanced",
+  "expert",
+] as const;
 
 function lapEstimateMs(classId: string, r: number): number {
   const base: Record<string, number> = {

@@ -1,7 +1,9 @@
 import "server-only";
 import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
+import { listEventEntryIds } from "../../db/queries/list-event-entry-ids";
 import { insertReinspection } from "../../db/queries/reinspections/insert-reinspection";
 import { runTransaction } from "../../db/run-transaction";
+import { AppError } from "../errors";
 import { RECOMPUTE_VERDICTS } from "../jobs/job-kinds";
 
 /**
@@ -20,6 +22,8 @@ export async function askReinspection(request: {
   now: Date;
 }): Promise<string> {
   const { now, ...row } = request;
+  const known = await listEventEntryIds({ eventId: request.eventId, entryIds: [request.entryId] });
+  if (!known.has(request.entryId)) throw new AppError("not_found", "No such car in this event.");
   return runTransaction(async (tx) => {
     const id = await insertReinspection(tx, { ...row, createdAt: now });
     await enqueueJobs(

@@ -17,6 +17,8 @@ export type StoredMessage = {
   messageId: string | null;
   text: string;
   html: string | null;
+  /** Files sent with it (text files, as Plumbline sends: an entrant's calendar). */
+  attachments: { filename: string | null; contentType: string; content: string }[];
 };
 
 export type SmtpFake = { close: () => Promise<void>; smtpPort: number; httpPort: number };
@@ -50,6 +52,11 @@ export async function startSmtpFake(opts: {
             messageId: mail.messageId ?? null,
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : null,
+            attachments: mail.attachments.map((a) => ({
+              filename: a.filename ?? null,
+              contentType: a.contentType,
+              content: a.content.toString("utf8"),
+            })),
           };
           await writeFile(path.join(opts.dir, `${id}.json`), JSON.stringify(message));
           callback();

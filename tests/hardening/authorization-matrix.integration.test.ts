@@ -89,6 +89,15 @@ const routes: Record<string, Row> = {
     expect: { ...only(200, "owner", ...officials) },
     call: get((c) => `/api/entries/${c.entryId}/verdict`),
   },
+  "GET /api/entries/[entryId]/calendar": {
+    // Allowed callers get through to the run sheet, which has no publication in this database.
+    expect: only(404, "owner", ...officials),
+    call: get((c) => `/api/entries/${c.entryId}/calendar`),
+  },
+  "GET /api/events/[eventId]/run-groups": {
+    expect: only(200, "clerk"),
+    call: get((c) => `/api/events/${c.eventId}/run-groups`),
+  },
   "GET /api/events/[eventId]/board": {
     expect: all(200),
     call: get((c) => `/api/events/${c.eventId}/board`),
@@ -134,7 +143,70 @@ const routes: Record<string, Row> = {
 // A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
 const signedInPage = (expect: Expect): Expect => ({ ...expect, anonymous: 307 });
 
+const clerkAction = (name: string, fields: (c: Ctx) => Record<string, string>): Row => ({
+  expect: signedInPage(only(200, "clerk")),
+  call: action(
+    `app/(officials)/clerk/[eventId]/actions.ts#${name}`,
+    (c) => `/clerk/${c.eventId}`,
+    fields,
+    {
+      status: "idle",
+    },
+  ),
+});
+const settingsJson = JSON.stringify({
+  dayStart: "09:00",
+  dayEnd: "17:00",
+  sessionMinutes: 20,
+  gapMinutes: 5,
+  lunch: null,
+  rounds: "fit",
+  briefing: null,
+});
+
 const actions: Record<string, Row> = {
+  // Each is let through and then refused without writing: a stale revision, no published sheet,
+  // no such car.
+  "app/(officials)/clerk/[eventId]/actions.ts#buildRunGroupsAction": clerkAction(
+    "buildRunGroupsAction",
+    (c) => ({ eventId: c.eventId, settings: settingsJson, revision: "999999" }),
+  ),
+  "app/(officials)/clerk/[eventId]/actions.ts#saveRunGroupsAction": clerkAction(
+    "saveRunGroupsAction",
+    (c) => ({
+      eventId: c.eventId,
+      groups: JSON.stringify([{ name: "Group 1", driveIds: [] }]),
+      settings: settingsJson,
+      revision: "999999",
+    }),
+  ),
+  "app/(officials)/clerk/[eventId]/actions.ts#publishRunSheetAction": clerkAction(
+    "publishRunSheetAction",
+    (c) => ({ eventId: c.eventId, revision: "999999" }),
+  ),
+  "app/(officials)/clerk/[eventId]/actions.ts#callSessionAction": clerkAction(
+    "callSessionAction",
+    (c) => ({ eventId: c.eventId, sessionKey: "1-1", state: "called", note: "" }),
+  ),
+  "app/(officials)/clerk/[eventId]/actions.ts#askReinspectionAction": clerkAction(
+    "askReinspectionAction",
+    (c) => ({
+      eventId: c.eventId,
+      entryId: randomUUID(),
+      cause: "incident",
+      askedBy: "Clerk of course",
+      reason: "matrix test: no such car",
+    }),
+  ),
+  "app/(officials)/tech/[eventId]/chief/actions.ts#closeReinspectionAction": {
+    expect: signedInPage(only(200, "chief")),
+    call: action(
+      "app/(officials)/tech/[eventId]/chief/actions.ts#closeReinspectionAction",
+      (c) => `/tech/${c.eventId}/chief`,
+      (c) => ({ eventId: c.eventId, reinspectionId: randomUUID(), note: "matrix test" }),
+      { status: "idle" },
+    ),
+  },
   "app/(officials)/organizer/[eventId]/rules/actions.ts#draftRuleSetAction": {
     expect: signedInPage(only(200, "organizer")),
     call: action(

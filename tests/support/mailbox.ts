@@ -1,5 +1,11 @@
 /** Messages the test SMTP fake received (scripts/fakes/smtp-fake.ts), newest first. */
-export type MailboxMessage = { to: string[]; subject: string; text: string; receivedAt: string };
+export type MailboxMessage = {
+  to: string[];
+  subject: string;
+  text: string;
+  receivedAt: string;
+  attachments?: { filename: string | null; contentType: string; content: string }[];
+};
 
 export async function listMail(mailboxUrl: string, since: number): Promise<MailboxMessage[]> {
   const { messages } = (await (await fetch(`${mailboxUrl}/messages`)).json()) as {

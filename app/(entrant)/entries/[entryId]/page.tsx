@@ -4,12 +4,16 @@ import Link from "next/link";
 import { forbidden, notFound } from "next/navigation";
 import { Caution } from "@/components/caution";
 import { EntryResultView } from "@/components/entry-result-view";
+import { EntryRunGroup } from "@/components/entry-run-group";
+import { getLatestRunSheet } from "@/db/queries/run-sheets/get-latest-run-sheet";
 import { requirePageUser } from "@/lib/auth/require-page-permission";
 import { loadEntryResult } from "@/lib/entries/load-entry-result";
 import { AppError } from "@/lib/errors";
 import { idSchema } from "@/lib/http/id-schema";
 import { entryKeys } from "@/lib/query/entry-queries";
 import { getQueryClient } from "@/lib/query/get-query-client";
+import { entrySessions } from "@/lib/run-sheet/entry-sessions";
+import { formatPublishedAt } from "@/lib/run-sheet/format-published-at";
 
 export const metadata: Metadata = { title: "Your entry" };
 
@@ -22,6 +26,7 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
+  const sheet = await getLatestRunSheet({ eventId: result.eventId });
   const queryClient = getQueryClient();
   queryClient.setQueryData(entryKeys.result(entryId), result);
   return (
@@ -41,6 +46,14 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
       <HydrationBoundary state={dehydrate(queryClient)}>
         <EntryResultView entryId={entryId} />
       </HydrationBoundary>
+      <EntryRunGroup
+        entryId={entryId}
+        eventId={result.eventId}
+        version={sheet?.version ?? null}
+        publishedAtText={sheet ? formatPublishedAt(sheet.publishedAt, sheet.body.timeZone) : null}
+        timeZone={sheet?.body.timeZone ?? "UTC"}
+        drives={sheet ? entrySessions(sheet.body, entryId) : []}
+      />
       <Link href={`/entries/${entryId}/pass`} className="btn-primary w-full sm:w-auto">
         Show my pass
       </Link>
