@@ -20,7 +20,9 @@ test("the clerk sees a cleared minor without a guardian's signature as not ready
 }) => {
   const car = await clearedMinorWithoutGuardian();
   const { context, page } = await signedIn(browser, demo.clerk);
-  await expect(page.getByRole("heading", { level: 1, name: "Ready to run" })).toBeVisible();
+  await expect(
+    page.getByRole("heading", { level: 1, name: "Run groups and the run sheet" }),
+  ).toBeVisible();
   // Who is signed in shows on a phone too, in short ("Gareth Lloyd" → "Gareth L.").
   await expect(page.getByTestId("signed-in-as")).toBeVisible();
   await expect(page.getByTestId("signed-in-as")).toHaveText(/^\S+ \S\.$/, { useInnerText: true });

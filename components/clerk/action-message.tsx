@@ -1,5 +1,5 @@
+import type { ClerkActionState } from "@/lib/run-sheet/clerk-action-state";
 import { ClearedIcon, StoppedIcon } from "../icons/state-icons";
-import type { ClerkActionState } from "./clerk-actions";
 
 /** What the server answered to the clerk's last action, in its own words. */
 export function ActionMessage({ state, testId }: { state: ClerkActionState; testId: string }) {

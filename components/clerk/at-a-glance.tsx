@@ -1,5 +1,5 @@
-import type { ReactNode } from "react";
 import type { ClerkCar } from "@/lib/run-sheet/clerk-view";
+import { EntryList } from "../entry-list";
 import {
   AttentionIcon,
   ClearedIcon,
@@ -16,13 +16,7 @@ const isTechClear = (car: ClerkCar) => car.status === "cleared" || car.status ==
  * Every car of the event at a glance: counts first, then the lists. Ready means cleared or moved
  * up at the tech line, signed on and not withdrawn; the rest say why they cannot run yet.
  */
-export function AtAGlance({
-  cars,
-  readyControl,
-}: {
-  cars: ClerkCar[];
-  readyControl: (car: ClerkCar) => ReactNode;
-}) {
+export function AtAGlance({ cars }: { cars: ClerkCar[] }) {
   const active = cars.filter((car) => !car.withdrawn);
   const ready = active.filter((car) => car.ready);
   const movedUp = active.filter((car) => car.status === "moved-up");
@@ -93,16 +87,12 @@ export function AtAGlance({
         empty="Every cleared car is signed on."
         why={(car) => `${car.signOn.missing.join("; ")}. The sign-on desk clears these.`}
       />
-      <CarStateList
-        title="Ready to run"
-        cars={ready}
-        testId="ready-list"
-        empty="No car is ready to run yet."
-        why={(car) =>
-          car.status === "moved-up" ? `Moved up: ${car.reason ?? "runs in a higher class"}` : null
-        }
-        control={readyControl}
-      />
+      <details className="card" data-testid="ready-list" open>
+        <summary className="flex min-h-touch cursor-pointer items-center text-xl font-bold">
+          Ready to run (<span className="tabular">{ready.length}</span>)
+        </summary>
+        <EntryList rows={ready.map(toRow)} emptyText="No car is ready to run yet." />
+      </details>
       <CarStateList
         title="Held"
         cars={held}
@@ -128,4 +118,19 @@ export function AtAGlance({
       ) : null}
     </section>
   );
+}
+
+function toRow(car: ClerkCar) {
+  return {
+    entryId: car.entryId,
+    carNumber: car.carNumber,
+    declaredClass: car.declaredClassName,
+    finalClass: car.runsInClassName,
+    car: car.car,
+    drivers: car.drivers,
+    status: car.status,
+    reason: car.status === "moved-up" ? car.reason : null,
+    needsChief: false,
+    signOn: car.signOn,
+  };
 }

@@ -1,24 +1,20 @@
-import type { ReactNode } from "react";
 import type { ClerkCar } from "@/lib/run-sheet/clerk-view";
 import { CarNumberChip } from "../car-number-chip";
 import { VerdictBadge } from "../verdict-badge";
 
-/** One list of cars in the at-a-glance section: number, verdict, drivers and why, plus any
- *  per-car control (such as "Ask for re-inspection"). */
+/** One list of cars in the at-a-glance section: number, verdict, drivers and why. */
 export function CarStateList({
   title,
   cars,
   testId,
   empty,
   why,
-  control,
 }: {
   title: string;
   cars: ClerkCar[];
   testId: string;
   empty: string;
   why: (car: ClerkCar) => string | null;
-  control?: (car: ClerkCar) => ReactNode;
 }) {
   return (
     <details className="card" data-testid={testId} open={cars.length > 0 && cars.length <= 12}>
@@ -40,7 +36,6 @@ export function CarStateList({
                 </span>
               </div>
               {because ? <p className="text-base font-semibold">{because}</p> : null}
-              {control?.(car)}
             </li>
           );
         })}

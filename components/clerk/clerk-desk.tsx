@@ -3,11 +3,11 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { applySessionCalls } from "@/lib/paddock/apply-session-calls";
 import { clerkViewQuery, runGroupKeys } from "@/lib/query/run-group-queries";
+import type { ClerkActionState } from "@/lib/run-sheet/clerk-action-state";
 import type { ClerkView } from "@/lib/run-sheet/clerk-view";
 import { Caution } from "../caution";
 import { ActionMessage } from "./action-message";
 import { AtAGlance } from "./at-a-glance";
-import type { ClerkActionState } from "./clerk-actions";
 import { type ClerkAction, type ClerkActions, formOf } from "./clerk-actions";
 import { ExportLinks } from "./export-links";
 import { FlaggedList } from "./flagged-list";
@@ -101,21 +101,7 @@ export function ClerkDeskView({
   return (
     <div className="space-y-6 pb-24">
       <FlaggedList flagged={view.flagged} />
-      <AtAGlance
-        cars={view.cars}
-        readyControl={(car) => (
-          <ReinspectionForm
-            entryId={car.entryId}
-            carNumber={car.carNumber}
-            pending={busy === "reinspect"}
-            fields={answers.reinspect?.status === "error" ? answers.reinspect.fields : undefined}
-            onAsk={(form) => run("reinspect", actions.askReinspection, form)}
-          />
-        )}
-      />
-      {answers.reinspect ? (
-        <ActionMessage state={answers.reinspect} testId="reinspect-message" />
-      ) : null}
+      <AtAGlance cars={view.cars} />
       <ScheduleSettingsForm
         settings={draft.settings}
         capText={`${view.cap.cars} cars per group (${view.cap.source})`}
@@ -164,7 +150,22 @@ export function ClerkDeskView({
               notes={preview.notes}
               flagged={flagged}
               onChange={draft.change}
+              carControls={(drive) => (
+                <ReinspectionForm
+                  key={drive.entryId}
+                  entryId={drive.entryId}
+                  carNumber={drive.carNumber}
+                  pending={busy === "reinspect"}
+                  fields={
+                    answers.reinspect?.status === "error" ? answers.reinspect.fields : undefined
+                  }
+                  onAsk={(form) => run("reinspect", actions.askReinspection, form)}
+                />
+              )}
             />
+            {answers.reinspect ? (
+              <ActionMessage state={answers.reinspect} testId="reinspect-message" />
+            ) : null}
           </>
         )}
       </section>

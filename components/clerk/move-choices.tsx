@@ -1,4 +1,5 @@
 "use client";
+import type { ReactNode } from "react";
 import type { Drive } from "@/lib/paddock/drive";
 import type { RunGroup } from "@/lib/paddock/run-group-plan";
 
@@ -13,6 +14,7 @@ export function MoveChoices({
   explanation,
   onMove,
   onCancel,
+  children,
 }: {
   drive: Drive;
   groups: RunGroup[];
@@ -20,6 +22,8 @@ export function MoveChoices({
   explanation: string | undefined;
   onMove: (toIndex: number) => void;
   onCancel: () => void;
+  /** More for this car (such as "Ask for re-inspection"). */
+  children?: ReactNode;
 }) {
   return (
     <section
@@ -49,6 +53,7 @@ export function MoveChoices({
           Cancel
         </button>
       </div>
+      {children}
     </section>
   );
 }

@@ -1,5 +1,5 @@
+import type { ClerkActionState } from "@/lib/run-sheet/clerk-action-state";
 import { ActionMessage } from "./action-message";
-import type { ClerkActionState } from "./clerk-actions";
 import { RunSheetDiffList } from "./run-sheet-diff-list";
 
 /** The server's answer to publishing: its words, how many entrants were e-mailed and the diff it

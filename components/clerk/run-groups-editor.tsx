@@ -1,6 +1,6 @@
 "use client";
 import { DndContext, type DragEndEvent, MouseSensor, useSensor, useSensors } from "@dnd-kit/core";
-import { useMemo, useState } from "react";
+import { type ReactNode, useMemo, useState } from "react";
 import type { Drive } from "@/lib/paddock/drive";
 import type { RunGroup } from "@/lib/paddock/run-group-plan";
 import type { ConstraintNote } from "./clerk-view-models";
@@ -28,6 +28,7 @@ export function RunGroupsEditor({
   notes,
   flagged,
   onChange,
+  carControls,
 }: {
   groups: RunGroup[];
   drives: Drive[];
@@ -38,6 +39,8 @@ export function RunGroupsEditor({
   notes: ConstraintNote[];
   flagged: Map<string, string>;
   onChange: (groups: RunGroup[], what: string) => void;
+  /** More for the selected car, under "Move to" (such as "Ask for re-inspection"). */
+  carControls?: (drive: Drive) => ReactNode;
 }) {
   const [selected, setSelected] = useState<string | null>(null);
   const drivesById = useMemo(() => new Map(drives.map((d) => [d.driveId, d])), [drives]);
@@ -104,7 +107,9 @@ export function RunGroupsEditor({
           explanation={explanations[selectedDrive.driveId]}
           onMove={(toIndex) => move(selectedDrive.driveId, toIndex)}
           onCancel={() => setSelected(null)}
-        />
+        >
+          {carControls?.(selectedDrive)}
+        </MoveChoices>
       ) : null}
     </div>
   );

@@ -2,8 +2,8 @@
 import { useRef, useState } from "react";
 import type { RunGroup } from "@/lib/paddock/run-group-plan";
 import type { ScheduleSettings } from "@/lib/paddock/schedule-settings";
+import type { ClerkActionState } from "@/lib/run-sheet/clerk-action-state";
 import type { ClerkView } from "@/lib/run-sheet/clerk-view";
-import type { ClerkActionState } from "./clerk-actions";
 import { type ClerkAction, formOf } from "./clerk-actions";
 
 type Local = { revision: number; groups: RunGroup[]; settings: ScheduleSettings };

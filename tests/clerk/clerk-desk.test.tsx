@@ -2,9 +2,10 @@
 import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import type { ClerkAction, ClerkActionState, ClerkActions } from "@/components/clerk/clerk-actions";
+import type { ClerkAction, ClerkActions } from "@/components/clerk/clerk-actions";
 import { ClerkDeskView } from "@/components/clerk/clerk-desk";
 import { previewRunSheet } from "@/components/clerk/preview-run-sheet";
+import type { ClerkActionState } from "@/lib/run-sheet/clerk-action-state";
 import type { ClerkView } from "@/lib/run-sheet/clerk-view";
 import { groups } from "./clerk-fixtures";
 import { clerkView } from "./clerk-view-fixture";
