@@ -87,7 +87,7 @@ export function AtAGlance({ cars }: { cars: ClerkCar[] }) {
         empty="Every cleared car is signed on."
         why={(car) => `${car.signOn.missing.join("; ")}. The sign-on desk clears these.`}
       />
-      <details className="card" data-testid="ready-list" open>
+      <details className="card" data-testid="ready-list">
         <summary className="flex min-h-touch cursor-pointer items-center text-xl font-bold">
           Ready to run (<span className="tabular">{ready.length}</span>)
         </summary>

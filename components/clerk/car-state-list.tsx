@@ -17,7 +17,7 @@ export function CarStateList({
   why: (car: ClerkCar) => string | null;
 }) {
   return (
-    <details className="card" data-testid={testId} open={cars.length > 0 && cars.length <= 12}>
+    <details className="card" data-testid={testId} open={cars.length > 0 && cars.length <= 6}>
       <summary className="flex min-h-touch cursor-pointer items-center text-xl font-bold">
         {title} (<span className="tabular">{cars.length}</span>)
       </summary>

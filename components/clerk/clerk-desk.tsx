@@ -11,6 +11,7 @@ import { AtAGlance } from "./at-a-glance";
 import { type ClerkAction, type ClerkActions, formOf } from "./clerk-actions";
 import { ExportLinks } from "./export-links";
 import { FlaggedList } from "./flagged-list";
+import { JumpLinks } from "./jump-links";
 import { previewRunSheet } from "./preview-run-sheet";
 import { publishBlockers } from "./publish-blockers";
 import { PublishPanel } from "./publish-panel";
@@ -100,7 +101,20 @@ export function ClerkDeskView({
 
   return (
     <div className="space-y-6 pb-24">
+      <JumpLinks published={view.published !== null} />
       <FlaggedList flagged={view.flagged} />
+      {view.published ? (
+        <SessionCallsPanel
+          live={live}
+          groupNames={view.published.body.groups.map((g) => g.name)}
+          timeZone={tz}
+          pending={busy === "call"}
+          onCall={(sessionKey, state, note) =>
+            run("call", actions.callSession, { sessionKey, state, note })
+          }
+        />
+      ) : null}
+      {answers.call ? <ActionMessage state={answers.call} testId="call-message" /> : null}
       <AtAGlance cars={view.cars} />
       <ScheduleSettingsForm
         settings={draft.settings}
@@ -180,18 +194,6 @@ export function ClerkDeskView({
       />
       {answers.publish ? <PublishResult state={answers.publish} timeZone={tz} /> : null}
       <VersionList versions={view.versions} timeZone={tz} />
-      {view.published ? (
-        <SessionCallsPanel
-          live={live}
-          groupNames={view.published.body.groups.map((g) => g.name)}
-          timeZone={tz}
-          pending={busy === "call"}
-          onCall={(sessionKey, state, note) =>
-            run("call", actions.callSession, { sessionKey, state, note })
-          }
-        />
-      ) : null}
-      {answers.call ? <ActionMessage state={answers.call} testId="call-message" /> : null}
       <ExportLinks eventId={view.event.id} published={view.published !== null} />
       <Caution title="The run sheet governs">
         The published run sheet is what counts: confirm the groups at the drivers&apos; briefing.

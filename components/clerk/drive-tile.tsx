@@ -13,8 +13,8 @@ const experienceLabel: Record<Drive["experience"], string> = {
 };
 
 /**
- * One drive in a run group: car number large, class, driver, experience, lap estimate and why it
- * sits here. Tap (or Enter) selects it for "Move to …"; on a desk it can also be dragged.
+ * One drive in a run group: car number large, class, driver, experience and lap estimate; once
+ * tapped (or Enter), why it sits here and "Move to …"; on a desk it can also be dragged.
  */
 export function DriveTile({
   drive,
@@ -80,7 +80,7 @@ export function DriveTile({
           <StoppedIcon className="size-5 shrink-0" /> {flagged}
         </p>
       ) : null}
-      {explanation ? (
+      {selected && explanation ? (
         <p className="px-2 pb-2 text-sm text-asphalt-700" data-testid="drive-explanation">
           {explanation}
         </p>

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import type { RunSheetDiff } from "@/lib/paddock/diff-run-sheets";
+import { changedEntryIds, type RunSheetDiff } from "@/lib/paddock/diff-run-sheets";
 import { Caution } from "../caution";
 import { StoppedIcon } from "../icons/state-icons";
 import { RunSheetDiffList } from "./run-sheet-diff-list";
@@ -68,6 +68,9 @@ export function PublishPanel({
             {nextVersion === 1 ? "the first run sheet" : `changes since version ${nextVersion - 1}`}
           </h3>
           <RunSheetDiffList diff={diff} timeZone={timeZone} firstVersion={nextVersion === 1} />
+          <p className="text-base" data-testid="publish-mail-count">
+            {mailWords(nextVersion === 1 ? diff.entryIds.length : changedEntryIds(diff).length)}
+          </p>
           <Caution title="Before you publish">
             A published version cannot be changed; publishing again makes a new version and e-mails
             the entrants whose group or times change. The published run sheet governs: confirm the
@@ -102,4 +105,9 @@ export function PublishPanel({
       ) : null}
     </section>
   );
+}
+
+function mailWords(count: number): string {
+  if (count === 0) return "Nobody's group or times change: no entrant will be e-mailed.";
+  return `${count} ${count === 1 ? "entrant" : "entrants"} will be e-mailed their group and times.`;
 }

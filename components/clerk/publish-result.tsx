@@ -11,7 +11,8 @@ export function PublishResult({ state, timeZone }: { state: ClerkActionState; ti
       <ActionMessage state={state} testId="publish-message" />
       <p className="text-base">
         Version <span className="tabular">{state.version}</span> is in force;{" "}
-        <span className="tabular">{state.mailed}</span> entrants e-mailed.
+        <span className="tabular">{state.mailed}</span>{" "}
+        {state.mailed === 1 ? "entrant" : "entrants"} e-mailed.
       </p>
       <RunSheetDiffList diff={state.diff} timeZone={timeZone} firstVersion={state.version === 1} />
     </section>

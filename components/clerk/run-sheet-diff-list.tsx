@@ -1,4 +1,4 @@
-import { changedEntryIds, type RunSheetDiff, type TimeSpan } from "@/lib/paddock/diff-run-sheets";
+import type { RunSheetDiff, TimeSpan } from "@/lib/paddock/diff-run-sheets";
 import { CarNumberChip } from "../car-number-chip";
 import { formatClockTime } from "./format-clock-time";
 
@@ -19,8 +19,7 @@ export function RunSheetDiffList({
   if (firstVersion) {
     return (
       <p className="text-base" data-testid="run-sheet-diff">
-        The first run sheet of the day: every entrant (
-        <span className="tabular">{diff.entryIds.length}</span>) gets their group and times.
+        The first run sheet of the day: every driver on it is new.
       </p>
     );
   }
@@ -70,10 +69,6 @@ export function RunSheetDiffList({
           ))}
         </ul>
       ) : null}
-      <p className="text-base">
-        <span className="tabular">{changedEntryIds(diff).length}</span> entrants will be e-mailed
-        their new group and times.
-      </p>
     </div>
   );
 }

@@ -153,4 +153,48 @@ describe("the clerk of course's page", () => {
     expect(publish).toHaveBeenCalledTimes(1);
     expect(publish.mock.calls[0]?.[1].get("revision")).toBe("2");
   });
+
+  it("during the day: a late start shifts the sessions behind it, and a red flag needs a note", async () => {
+    const first = clerkView();
+    const sheet = previewRunSheet({
+      view: first,
+      groups,
+      settings: first.defaultSettings,
+      capCars: 3,
+    }).sheet;
+    if (!sheet) throw new Error("no sheet");
+    // Group 1, round 1 is planned 08:45–09:05 local (07:45 UTC); it went on track 10 minutes late.
+    const view = clerkView({
+      published: {
+        id: "p1",
+        eventId: "event-1",
+        version: 1,
+        publishedAt: "2026-05-16T06:00:00.000Z",
+        publishedBy: "Clerk",
+        body: sheet,
+      },
+      versions: [{ version: 1, publishedAt: "2026-05-16T06:00:00.000Z", publishedBy: "Clerk" }],
+      calls: [{ sessionKey: "1-1", state: "on-track", at: "2026-05-16T07:55:00.000Z", note: null }],
+      now: "2026-05-16T08:00:00.000Z",
+    });
+    const callSession = vi.fn<ClerkAction>(async () => ({ status: "done", message: "Marked." }));
+    renderDesk(view, { ...fakeActions(), callSession });
+    const rows = screen.getAllByTestId("session-call");
+    expect(rows[0]?.textContent).toMatch(/On track/);
+    // Group 2 was planned 09:10–09:30; Group 1 now ends 09:15, so Group 2 starts 10 minutes later.
+    expect(rows[1]?.textContent).toMatch(/Planned 09:10–09:30 · now 09:20–09:40 \(\+10 min\)/);
+    const row = within(rows[0] as HTMLElement);
+    await userEvent.click(row.getByRole("button", { name: "Red flag" }));
+    expect(row.getByRole("alert").textContent).toMatch(/needs a note/);
+    expect(callSession).not.toHaveBeenCalled();
+    await userEvent.type(row.getByRole("textbox"), "Car off at turn 3");
+    await userEvent.click(row.getByRole("button", { name: "Red flag" }));
+    const form = callSession.mock.calls[0]?.[1];
+    expect([
+      form?.get("eventId"),
+      form?.get("sessionKey"),
+      form?.get("state"),
+      form?.get("note"),
+    ]).toEqual(["event-1", "1-1", "red-flag", "Car off at turn 3"]);
+  });
 });
