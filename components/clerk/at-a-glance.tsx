@@ -90,6 +90,9 @@ export function AtAGlance({ cars }: { cars: ClerkCar[] }) {
       <details className="card" data-testid="ready-list">
         <summary className="flex min-h-touch cursor-pointer items-center text-xl font-bold">
           Ready to run (<span className="tabular">{ready.length}</span>)
+          <span aria-hidden="true" className="ml-auto text-asphalt-700">
+            ▾
+          </span>
         </summary>
         <EntryList rows={ready.map(toRow)} emptyText="No car is ready to run yet." />
       </details>

@@ -20,6 +20,9 @@ export function CarStateList({
     <details className="card" data-testid={testId} open={cars.length > 0 && cars.length <= 6}>
       <summary className="flex min-h-touch cursor-pointer items-center text-xl font-bold">
         {title} (<span className="tabular">{cars.length}</span>)
+        <span aria-hidden="true" className="ml-auto text-asphalt-700">
+          ▾
+        </span>
       </summary>
       {cars.length === 0 ? <p className="text-base text-asphalt-700">{empty}</p> : null}
       <ul className="mt-2 divide-y divide-asphalt-200">

@@ -14,5 +14,7 @@ export function carStateWhy(car: ClerkCar): string | null {
     parts.push("Not seen at the tech line yet");
   }
   if (!car.signOn.signedOn) parts.push(`${car.signOn.missing.join("; ")}`);
-  return parts.length > 0 ? `${parts.join(". ")}.` : null;
+  if (parts.length === 0) return null;
+  const text = parts.map((part) => part.replace(/[.\s]+$/, "")).join(". ");
+  return `${text}.`;
 }
