@@ -1,12 +1,9 @@
-/**
- * Where the printable and CSV exports live. Paths follow the exports engineer's routes as found
- * on their branch (tech results and chief scrutineer's report under /tech); the run sheet's under
- * /clerk and /api/events/<id>/exports until theirs land.
- */
+/** Where the printable and CSV exports live (the exports' routes: run sheet under /clerk, tech
+ *  results and the chief scrutineer's report under /tech, CSV files under /api/events/<id>). */
 export function exportLinks(eventId: string) {
   return [
     { label: "Run sheet (print, A4)", href: `/clerk/${eventId}/print/run-sheet` },
-    { label: "Run sheet (CSV)", href: `/api/events/${eventId}/exports/run-sheet.csv` },
+    { label: "Run sheet (CSV)", href: `/api/events/${eventId}/run-sheet/csv` },
     { label: "Tech results (print, A4)", href: `/tech/${eventId}/print/results` },
     { label: "Tech results (CSV)", href: `/api/events/${eventId}/tech-results/csv` },
     { label: "Chief scrutineer's report (print)", href: `/tech/${eventId}/print/chief-report` },
