@@ -3,7 +3,8 @@ import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
 
 // The clerk of course's page on a desk and on a phone: build run groups from the demo day's
-// ready cars, move a car by tap-to-move, publish, move again and see the diff before publishing.
+// ready cars, move a car by tap-to-move, publish, drag one and tap-move another, and see the diff
+// (who moved) before publishing again.
 // Screenshots go to CLERK_SCREENSHOTS_DIR when set (for looking at), else the test's output.
 const desk = { width: 1440, height: 900 };
 const phone = { width: 390, height: 844 };
@@ -45,6 +46,27 @@ async function tapMoveFirstCar(page: Page): Promise<string> {
   return carNumber;
 }
 
+/** On a desk: drag the first car of the second group across onto the first group (the cards
+ *  stand side by side) with the mouse. */
+async function dragCarToFirstGroup(page: Page) {
+  const groups = page.getByTestId("run-group");
+  await groups.first().locator("header").scrollIntoViewIfNeeded();
+  const tile = groups.nth(1).getByTestId("drive-tile").first();
+  const carNumber = (await tile.getAttribute("data-car-number")) ?? "";
+  const from = await tile.boundingBox();
+  const to = await groups.first().getByTestId("drive-tile").first().boundingBox();
+  if (!from || !to) throw new Error("nothing to drag");
+  await page.mouse.move(from.x + 40, from.y + 20);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 60, from.y + 30, { steps: 5 });
+  await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 20 });
+  await page.mouse.up();
+  await expect(
+    groups.first().locator(`[data-testid="drive-tile"][data-car-number="${carNumber}"]`),
+  ).not.toHaveCount(0);
+  await saved(page);
+}
+
 test("the clerk builds, moves a car, publishes, and sees the diff before publishing again", async ({
   browser,
 }) => {
@@ -64,9 +86,10 @@ test("the clerk builds, moves a car, publishes, and sees the diff before publish
   await expect(page.getByTestId("publish-result")).toContainText("Version 1 is in force");
   await expect(page.getByTestId("versions")).toContainText("Version 1 (in force)");
 
+  await dragCarToFirstGroup(page);
   const moved = await tapMoveFirstCar(page);
   await page.getByRole("button", { name: /Review changes and publish version 2/ }).click();
-  await expect(page.getByTestId("diff-moved").locator("li")).toHaveCount(1);
+  await expect(page.getByTestId("diff-moved").locator("li")).toHaveCount(2);
   await expect(page.getByTestId("diff-moved")).toContainText(moved);
   await page.getByTestId("publish-confirm").scrollIntoViewIfNeeded();
   await shot(page, "clerk-desk-publish-diff");
