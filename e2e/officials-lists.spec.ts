@@ -20,7 +20,9 @@ test("the clerk sees a cleared minor without a guardian's signature as not ready
 }) => {
   const car = await clearedMinorWithoutGuardian();
   const { context, page } = await signedIn(browser, demo.clerk);
-  await expect(page.getByRole("heading", { level: 1, name: "Ready to run" })).toBeVisible();
+  await expect(
+    page.getByRole("heading", { level: 1, name: "Run groups and the run sheet" }),
+  ).toBeVisible();
   // Who is signed in shows on a phone too, in short ("Gareth Lloyd" → "Gareth L.").
   await expect(page.getByTestId("signed-in-as")).toBeVisible();
   await expect(page.getByTestId("signed-in-as")).toHaveText(/^\S+ \S\.$/, { useInnerText: true });
@@ -29,7 +31,9 @@ test("the clerk sees a cleared minor without a guardian's signature as not ready
   await expect(apart.locator(`[data-car-number="${car}"]`)).toContainText(
     "Waiver needs a parent's or guardian's signature (minor)",
   );
-  // Not in the ready-to-run list, and a search that finds nothing says so in words.
+  // Not in the ready-to-run list (folded on the clerk's page: open it), and a search that finds
+  // nothing says so in words.
+  await page.getByTestId("ready-list").locator("summary").click();
   await page.getByTestId("entry-search").fill(String(car));
   await expect(
     page.getByTestId("entry-row").and(page.locator(`[data-car-number="${car}"]`)),
