@@ -48,6 +48,12 @@ const junkJson = fc.oneof(
 );
 
 async function expectRefusal(answer: { status: number; text: string }) {
+  // A form over the page's body limit is refused before it is read (proxy.ts), in words.
+  if (answer.status === 413) {
+    const message = /"message":"((?:[^"\\]|\\.)*)"/.exec(answer.text)?.[1] ?? answer.text;
+    expect(isReadable(message), answer.text.slice(0, 300)).toBe(true);
+    return;
+  }
   expect(answer.status, answer.text.slice(0, 300)).toBe(200);
   expect(answer.text).toMatch(/"status":"error"/);
   const message = /"message":"((?:[^"\\]|\\.)*)"/.exec(answer.text)?.[1];
