@@ -1,6 +1,8 @@
 import { type Browser, expect, type Page, test } from "@playwright/test";
+import ICAL from "ical.js";
 import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
+import { mailFor, publishedDrive } from "./support/published-drive";
 
 // The clerk of course's page on a desk and on a phone: build run groups from the demo day's
 // ready cars, move a car by tap-to-move, publish, drag one and tap-move another, and see the diff
@@ -82,12 +84,14 @@ test("the clerk builds, moves a car, publishes, and sees the diff before publish
   // Another spec may have published on this database first: count from what the page offers.
   const review = page.getByRole("button", { name: /Review changes and publish version \d+/ });
   const first = Number(/version (\d+)/.exec((await review.textContent()) ?? "")?.[1]);
+  const publishedSince = Date.now();
   await review.click();
   const confirm = page.getByTestId("publish-confirm");
   await confirm.getByRole("checkbox").check();
   await confirm.getByRole("button", { name: `Publish version ${first}` }).click();
   await expect(page.getByTestId("publish-result")).toContainText(`Version ${first} is in force`);
   await expect(page.getByTestId("versions")).toContainText(`Version ${first} (in force)`);
+  await entrantSeesTheirGroup(browser, first, publishedSince);
 
   await dragCarToFirstGroup(page);
   const moved = await tapMoveFirstCar(page);
@@ -124,3 +128,43 @@ test("the clerk builds, moves a car, publishes, and sees the diff before publish
   await shot(onPhone.page, "clerk-phone-day");
   await onPhone.context.close();
 });
+
+/** A driver on the published sheet: the e-mail with the calendar file (RFC 5545, read back by
+ *  ical.js: one event per session of each of the car's drives, 3 rounds here… or as many as the
+ *  sheet has, plus the briefing), the group on the entry page and the calendar download, and the
+ *  car in its group on the paddock board. */
+async function entrantSeesTheirGroup(browser: Browser, version: number, since: number) {
+  const drive = await publishedDrive(version);
+  const mail = await mailFor(drive.email, since, /run sheet/);
+  expect(mail.subject).toContain(`Car ${drive.carNumber}:`);
+  expect(mail.text).toContain(drive.groupName);
+  const file = mail.attachments?.find((a) => a.filename?.endsWith(".ics"));
+  expect(file?.contentType).toMatch(/^text\/calendar/);
+  const events = new ICAL.Component(ICAL.parse(file?.content ?? "")).getAllSubcomponents("vevent");
+  expect(events.length).toBeGreaterThan(drive.drivesOfCar);
+
+  const context = await browser.newContext({ viewport: phone, deviceScaleFactor: 1 });
+  const page = await context.newPage();
+  await new SignInPage(page).open(`/entries/${drive.entryId}`);
+  await new SignInPage(page).withPassword(drive.email, demo.password);
+  await expect(page).toHaveURL(new RegExp(`/entries/${drive.entryId}$`));
+  await expect(page.getByTestId("entry-run-group")).toContainText(drive.groupName);
+  const download = page.waitForEvent("download");
+  await page.getByTestId("entry-calendar").click();
+  const stream = await (await download).createReadStream();
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(chunk as Buffer);
+  const ics = Buffer.concat(chunks).toString("utf8");
+  expect(new ICAL.Component(ICAL.parse(ics)).getAllSubcomponents("vevent").length).toBe(
+    events.length,
+  );
+
+  await page.goto(`/board/${drive.eventId}`);
+  await expect(
+    page
+      .locator(`[data-testid="run-sheet-group"][data-group-name="${drive.groupName}"]`)
+      .locator(`[data-car-number="${drive.carNumber}"]`)
+      .first(),
+  ).toBeVisible();
+  await context.close();
+}
