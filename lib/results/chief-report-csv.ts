@@ -10,8 +10,13 @@ import type { ChiefReport } from "./shape-chief-report";
  * with its reason, and the verdict time in the event's zone. Every line says the report is
  * provisional, with its time of issue.
  */
-export function chiefReportCsv(report: ChiefReport, timeZone: string): string {
-  const standing = `Provisional, issued ${describeIssueTime(report.issuedAt, timeZone)}`;
+export function chiefReportCsv(
+  report: ChiefReport,
+  timeZone: string,
+  standingWords?: string,
+): string {
+  const standing =
+    standingWords ?? `Provisional, issued ${describeIssueTime(report.issuedAt, timeZone)}`;
   return resultsCsv(
     [
       "Car",

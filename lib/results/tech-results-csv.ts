@@ -11,12 +11,17 @@ import type { TechResults } from "./shape-tech-results";
  * so a line copied elsewhere keeps both.
  * @param timeZone the event's IANA zone (named in the time column's heading)
  */
-export function techResultsCsv(results: TechResults, timeZone: string): string {
+export function techResultsCsv(
+  results: TechResults,
+  timeZone: string,
+  standingWords?: string,
+): string {
   const cars = results.classes
     .flatMap((c) => c.cars)
     .concat(results.held, results.notYet)
     .sort((a, b) => a.carNumber - b.carNumber);
-  const standing = `Provisional, issued ${describeIssueTime(results.issuedAt, timeZone)}`;
+  const standing =
+    standingWords ?? `Provisional, issued ${describeIssueTime(results.issuedAt, timeZone)}`;
   return resultsCsv(
     [
       "Car",

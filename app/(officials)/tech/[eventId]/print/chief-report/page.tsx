@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import { ChiefReportSheet } from "@/components/print/chief-report-sheet";
 import { PrintSheet } from "@/components/print/print-sheet";
 import { loadEventPage } from "@/lib/auth/load-event-page";
-import { describeIssueTime } from "@/lib/results/describe-issue-time";
 import { loadChiefReport } from "@/lib/results/load-chief-report";
+import { loadResultsStanding } from "@/lib/results/load-results-standing";
 import { RESULTS_NOTICE } from "@/lib/results/results-notice";
 
 export const metadata: Metadata = { title: "Chief scrutineer's report (print)" };
@@ -22,12 +22,13 @@ export default async function ChiefReportPrintPage({
     returnTo: `/tech/${eventId}/print/chief-report`,
   });
   const { report, timeZone, unitSystem } = await loadChiefReport({ eventId });
+  const standing = await loadResultsStanding({ eventId, issuedAt: report.issuedAt, timeZone });
   return (
     <PrintSheet
       roleLabel="Chief scrutineer's report to the clerk of course"
       title="Cars examined at the tech line"
       event={event}
-      standing={`Provisional — issued ${describeIssueTime(report.issuedAt, timeZone)}`}
+      standing={standing.words}
       notice={RESULTS_NOTICE}
       units={unitSystem}
       csvHref={`/api/events/${eventId}/chief-report/csv`}

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { PrintSheet } from "@/components/print/print-sheet";
 import { TechResultsSheet } from "@/components/print/tech-results-sheet";
 import { loadEventPage } from "@/lib/auth/load-event-page";
-import { describeIssueTime } from "@/lib/results/describe-issue-time";
+import { loadResultsStanding } from "@/lib/results/load-results-standing";
 import { loadTechResults } from "@/lib/results/load-tech-results";
 import { RESULTS_NOTICE } from "@/lib/results/results-notice";
 
@@ -22,12 +22,13 @@ export default async function TechResultsPrintPage({
     returnTo: `/tech/${eventId}/print/results`,
   });
   const { results, timeZone, unitSystem } = await loadTechResults({ eventId });
+  const standing = await loadResultsStanding({ eventId, issuedAt: results.issuedAt, timeZone });
   return (
     <PrintSheet
       roleLabel="Tech results"
       title="Tech results by class"
       event={event}
-      standing={`Provisional — issued ${describeIssueTime(results.issuedAt, timeZone)}`}
+      standing={standing.words}
       notice={RESULTS_NOTICE}
       units={unitSystem}
       csvHref={`/api/events/${eventId}/tech-results/csv`}

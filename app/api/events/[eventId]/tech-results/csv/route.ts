@@ -4,6 +4,7 @@ import { defineRoute } from "@/lib/http/define-route";
 import { eventParams, pathEvent } from "@/lib/http/route-params";
 import { csvDownload } from "@/lib/results/csv-download";
 import { exportFileStem } from "@/lib/results/export-file-stem";
+import { loadResultsStanding } from "@/lib/results/load-results-standing";
 import { loadTechResults } from "@/lib/results/load-tech-results";
 import { techResultsCsv } from "@/lib/results/tech-results-csv";
 
@@ -16,8 +17,13 @@ export const GET = defineRoute({
     const event = await getEventSummary({ eventId: params.eventId });
     if (!event) throw new AppError("not_found", "No such event.");
     const { results, timeZone } = await loadTechResults({ eventId: params.eventId });
+    const standing = await loadResultsStanding({
+      eventId: params.eventId,
+      issuedAt: results.issuedAt,
+      timeZone,
+    });
     return csvDownload(
-      techResultsCsv(results, timeZone),
+      techResultsCsv(results, timeZone, standing.words.replace(" — ", ", ")),
       exportFileStem({
         what: "tech-results",
         eventSlug: event.slug,
