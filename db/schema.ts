@@ -399,7 +399,11 @@ export const sessionCalls = mysqlTable(
     eventId: uuid("event_id")
       .notNull()
       .references(() => events.id),
+    /** The session as it was on the sheet when marked (`round-groupIndex`), and the group's name
+     *  and round, by which a mark follows its group when a later version reorders the groups. */
     sessionKey: key("session_key", 8).notNull(),
+    groupName: varchar("group_name", { length: 40 }).notNull(),
+    round: smallint("round").notNull(),
     state: mysqlEnum("state", sessionCallStates).notNull(),
     note: varchar("note", { length: 500 }),
     calledAt: datetime("called_at", { mode: "date", fsp: 3 }).notNull(),

@@ -20,7 +20,7 @@ const homes = [
     who: "clerk of course",
     email: demo.clerk,
     url: /\/clerk\/[0-9a-f-]{36}$/,
-    heading: "Ready to run",
+    heading: "Run groups and the run sheet",
   },
   {
     who: "organizer",

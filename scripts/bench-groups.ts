@@ -197,7 +197,7 @@ async function main() {
       `build (buildRunGroups):                median ${build.toFixed(1)} ms of ${repetitions} (min ${Math.min(...buildMs).toFixed(1)}, max ${Math.max(...buildMs).toFixed(1)})`,
       `build ÷ read: ${(build / read).toFixed(1)}`,
       `groups: ${plan.groups.length}, lower bound ${plan.lowerBound} (${plan.groups.length === plan.lowerBound ? "at the bound" : `+${plan.groups.length - plan.lowerBound}`})`,
-      `objective: ${s.total} = back-to-back ${s.backToBack}, novices with the fastest ${s.noviceWithFastest}, class mix ${s.classMix}, class-rank spread ${s.classRankSpread}, experience spread ${s.experienceSpread}, size spread ${s.sizeSpread}, lap spread ${(s.lapSpreadMs / 1000).toFixed(1)} s`,
+      `objective: ${s.total} = back-to-back ${s.backToBack}, round wrap ${s.roundWrap}, novices with the fastest ${s.noviceWithFastest}, class mix ${s.classMix}, class-rank spread ${s.classRankSpread}, experience spread ${s.experienceSpread}, size spread ${s.sizeSpread}, lap spread ${(s.lapSpreadMs / 1000).toFixed(1)} s`,
       `relaxed lower bound on the objective: ${bound} (objective ÷ bound ${(s.total / Math.max(1, bound)).toFixed(2)}; the bound ignores the cap, conflicts, class-rank spread and how classes and laps correlate, so it is loose)`,
       `gave way: ${plan.gaveWay.length}`,
     ];

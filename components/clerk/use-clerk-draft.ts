@@ -106,7 +106,10 @@ export function useClerkDraft({
     changeSettings: (settings) => {
       keep({ revision: current?.revision ?? -1, groups: current?.groups ?? [], settings });
       if (settingsTimer.current) clearTimeout(settingsTimer.current);
-      if (current) settingsTimer.current = setTimeout(saveLatest, 800);
+      if (!current) return;
+      // Saving from the first keystroke: publishing waits until the settings typed are saved.
+      setSaving(true);
+      settingsTimer.current = setTimeout(saveLatest, 800);
     },
     reload: () => {
       latest.current = null;

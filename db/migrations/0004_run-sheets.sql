@@ -29,6 +29,8 @@ CREATE TABLE `session_calls` (
 	`id` varchar(36) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin NOT NULL,
 	`event_id` varchar(36) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin NOT NULL,
 	`session_key` varchar(8) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin NOT NULL,
+	`group_name` varchar(40) NOT NULL,
+	`round` smallint NOT NULL,
 	`state` enum('called','on-track','red-flag','finished','cut-short') NOT NULL,
 	`note` varchar(500),
 	`called_at` datetime(3) NOT NULL,

@@ -1,7 +1,7 @@
 import { queryTestDb } from "../../tests/support/query-test-db";
 
-/** A drive on the event's latest published run sheet, with its driver's e-mail and entry. */
-export async function publishedDrive(version: number) {
+/** A car's first drive on run sheet `version`, with its driver's e-mail and entry. */
+export async function publishedDrive(version: number, carNumber: number) {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set (run through scripts/e2e.sh)");
   const [row] = await queryTestDb<{ event_id: string; body: string | object }>(
@@ -14,8 +14,8 @@ export async function publishedDrive(version: number) {
     drives: { driveId: string; entryId: string; carNumber: number; driverKey: string }[];
     groups: { name: string; driveIds: string[] }[];
   };
-  const drive = body.drives.find((d) => d.driveId.endsWith(":1"));
-  if (!drive) throw new Error("no driver's drive on the sheet");
+  const drive = body.drives.find((d) => d.carNumber === carNumber && d.driveId.endsWith(":1"));
+  if (!drive) throw new Error(`car ${carNumber} is not on run sheet version ${version}`);
   const group = body.groups.find((g) => g.driveIds.includes(drive.driveId));
   const [user] = await queryTestDb<{ email: string }>(url, "select email from users where id = ?", [
     drive.driverKey,

@@ -5,6 +5,7 @@ import { listEventEntries } from "../../db/queries/list-event-entries";
 import { getLatestRunSheet } from "../../db/queries/run-sheets/get-latest-run-sheet";
 import { listSessionCalls } from "../../db/queries/run-sheets/list-session-calls";
 import { AppError } from "../errors";
+import { callsOnSheet } from "../paddock/calls-on-sheet";
 import type { Board } from "./board-schema";
 import { shapeBoardRunSheet } from "./shape-board-run-sheet";
 
@@ -45,6 +46,6 @@ export async function getPaddockBoard({
           entries: rows.map((r) => ({ entryId: r.entryId, status: r.status })),
         })
       : null,
-    calls: publication ? calls : [],
+    calls: publication ? callsOnSheet(calls, publication.body) : [],
   };
 }

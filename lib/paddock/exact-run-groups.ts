@@ -1,6 +1,6 @@
 import { hardPenalty } from "./group-search-state";
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights } from "./score-run-groups";
+import { isRoundWrap, planScoreWeights } from "./score-run-groups";
 
 const w = { ...planScoreWeights };
 
@@ -80,13 +80,12 @@ export function exactRunGroups(
       if (slow > fast) total += w.lapSpreadMs * (slow - fast);
     }
     for (const i of order.slice(0, placed))
-      for (const e of neighbours[i] ?? [])
-        if (
-          e.other > i &&
-          (groupOf[e.other] ?? -1) >= 0 &&
-          Math.abs((groupOf[i] ?? 0) - (groupOf[e.other] ?? 0)) === 1
-        )
-          total += w.backToBack;
+      for (const e of neighbours[i] ?? []) {
+        if (e.other <= i || (groupOf[e.other] ?? -1) < 0) continue;
+        const gap = Math.abs((groupOf[i] ?? 0) - (groupOf[e.other] ?? 0));
+        if (gap === 1) total += w.backToBack;
+        if (isRoundWrap(gap, groupCount)) total += w.roundWrap;
+      }
     if (fastest >= 0 && (groupOf[fastest] ?? -1) >= 0)
       for (const i of members[groupOf[fastest] ?? 0] ?? [])
         if (i !== fastest && experienceOf[i] === 0) total += w.noviceWithFastest;

@@ -1,5 +1,5 @@
 import type { RunGroupInstance } from "./run-group-instance";
-import { planScoreWeights } from "./score-run-groups";
+import { isRoundWrap, planScoreWeights } from "./score-run-groups";
 
 // Read once: the search asks for these millions of times.
 const w = { ...planScoreWeights };
@@ -171,7 +171,7 @@ export class GroupSearchState {
     if (gap === 0) return hardPenalty;
     if (gap === 1)
       return w.backToBack + (this.spaceable[this.instance.componentOf[i] ?? 0] ? hardPenalty : 0);
-    return 0;
+    return isRoundWrap(gap, this.groupCount) ? w.roundWrap : 0;
   }
 
   private conflictDelta(i: number, from: number, to: number, skip: number): number {

@@ -1,4 +1,5 @@
 import type { RunGroupInstance } from "./run-group-instance";
+import { isRoundWrap } from "./score-run-groups";
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -15,24 +16,28 @@ function adjacentPairs(
 ) {
   let all = 0;
   let hard = 0;
+  let wrap = 0;
   instance.neighbours.forEach((edges, i) => {
     for (const e of edges) {
       const gap = Math.abs(
         (position[groupOf[i] ?? 0] ?? 0) - (position[groupOf[e.other] ?? 0] ?? 0),
       );
-      if (e.other <= i || gap !== 1) continue;
+      if (e.other <= i) continue;
+      if (isRoundWrap(gap, position.length)) wrap += 1;
+      if (gap !== 1) continue;
       all += 1;
       if (spaceable[instance.componentOf[i] ?? 0]) hard += 1;
     }
   });
-  return { all, hard };
+  return { all, hard, wrap };
 }
 
 /**
  * Renumber the groups so the rotation runs fastest first: by the median of the group's lap-time
  * estimates, quickest first; groups without any estimate after those, highest average class rank
  * first; ties keep their order. Only done when the new order puts no more conflicting drives in the
- * adjacent groups than the old one, in all and where that is a hard rule (every other part of the objective ignores the order,
+ * adjacent groups (or in the last and first, from 4 groups) than the old one, in all and where
+ * that is a hard rule (every other part of the objective ignores the order,
  * so the score does not change); otherwise the order the search found stays.
  */
 export function orderGroupsByPace(
@@ -68,6 +73,8 @@ export function orderGroupsByPace(
   const identity = Int32Array.from({ length: groupCount }, (_, g) => g);
   const now = adjacentPairs(instance, groupOf, identity, spaceable);
   const sortedPairs = adjacentPairs(instance, groupOf, position, spaceable);
-  if (sortedPairs.hard > now.hard || sortedPairs.all > now.all) return Int32Array.from(groupOf);
+  if (sortedPairs.hard > now.hard || sortedPairs.all > now.all || sortedPairs.wrap > now.wrap) {
+    return Int32Array.from(groupOf);
+  }
   return Int32Array.from(groupOf, (g) => position[g] ?? 0);
 }

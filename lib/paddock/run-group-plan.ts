@@ -38,6 +38,9 @@ export type PlanScore = {
   total: number;
   /** Pairs of conflicting drives (one car, or one driver) in adjacent groups of the rotation. */
   backToBack: number;
+  /** With 4 or more groups: conflicting pairs in the last group and the first, which run back to
+   *  back from one round into the next. */
+  roundWrap: number;
   /** Σ over groups of (distinct classes in the group − 1). */
   classMix: number;
   /** Σ over groups of (highest − lowest class rank on the ladder). */

@@ -10,6 +10,11 @@ import type { PlanScore } from "./run-group-plan";
  *   the rotation. Where the number of groups allows keeping them apart this is a hard rule
  *   (HPDE run-group guidance; common practice (no source)), so the term only counts pairs where it
  *   gave way; its weight puts "fewest such pairs" ahead of every preference below.
+ * - `roundWrap` (100 000 000 per pair): with 4 or more groups, a car's or a driver's two drives in
+ *   the last group and the first, which run back to back from one round into the next. Not a hard
+ *   rule (with 3 groups it is the only way to keep a shared car's drivers apart within a round),
+ *   but weighted above every preference, so the search keeps them apart across rounds too wherever
+ *   it can.
  * - `noviceWithFastest` (200 000 per novice): novices in the group of the fastest lap-time estimate
  *   ("novices never with the fastest group where it can be avoided").
  * - `classMix` (100 000 per extra class): Σ over groups of (distinct classes − 1) — classes together.
@@ -27,6 +32,7 @@ import type { PlanScore } from "./run-group-plan";
  */
 export const planScoreWeights = {
   backToBack: 1_000_000_000,
+  roundWrap: 100_000_000,
   noviceWithFastest: 200_000,
   classMix: 100_000,
   classRankSpread: 30_000,
@@ -35,11 +41,18 @@ export const planScoreWeights = {
   lapSpreadMs: 1,
 } as const;
 
+/** Whether two groups `gap` apart in a rotation of `groupCount` are the last and the first, which
+ *  run back to back from one round into the next (counted from 4 groups: see `roundWrap`). */
+export function isRoundWrap(gap: number, groupCount: number): boolean {
+  return groupCount >= 4 && gap === groupCount - 1;
+}
+
 /** Total of the weighted parts (see `planScoreWeights`). */
 export function weightedTotal(parts: Omit<PlanScore, "groups" | "total">): number {
   const w = planScoreWeights;
   return (
     w.backToBack * parts.backToBack +
+    w.roundWrap * parts.roundWrap +
     w.noviceWithFastest * parts.noviceWithFastest +
     w.classMix * parts.classMix +
     w.classRankSpread * parts.classRankSpread +
@@ -62,11 +75,14 @@ export function scoreRunGroups(
     for (const i of m) groupOf[i] = g;
   });
   let backToBack = 0;
+  let roundWrap = 0;
   instance.neighbours.forEach((edges, i) => {
     for (const e of edges) {
       const gi = groupOf[i] ?? -1;
       const gk = groupOf[e.other] ?? -1;
-      if (e.other > i && gi >= 0 && gk >= 0 && Math.abs(gi - gk) === 1) backToBack += 1;
+      if (e.other <= i || gi < 0 || gk < 0) continue;
+      if (Math.abs(gi - gk) === 1) backToBack += 1;
+      if (isRoundWrap(Math.abs(gi - gk), members.length)) roundWrap += 1;
     }
   });
   let classMix = 0;
@@ -92,6 +108,7 @@ export function scoreRunGroups(
   const sizeSpread = sizes.length ? Math.max(...sizes) - Math.min(...sizes) : 0;
   const parts = {
     backToBack,
+    roundWrap,
     noviceWithFastest,
     classMix,
     classRankSpread,

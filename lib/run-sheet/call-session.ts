@@ -21,6 +21,6 @@ export async function callSession(args: {
   if (!session || !group) {
     throw new AppError("not_found", "That session is not on the published run sheet.");
   }
-  await insertSessionCall(args);
+  await insertSessionCall({ ...args, groupName: group.name, round: session.round });
   return { groupName: group.name, round: session.round };
 }

@@ -3,6 +3,7 @@ import { getLatestRunSheet } from "../../db/queries/run-sheets/get-latest-run-sh
 import { getRunGroupDraft } from "../../db/queries/run-sheets/get-run-group-draft";
 import { listRunSheetVersions } from "../../db/queries/run-sheets/list-run-sheet-versions";
 import { listSessionCalls } from "../../db/queries/run-sheets/list-session-calls";
+import { callsOnSheet } from "../paddock/calls-on-sheet";
 import { groupCap } from "../paddock/group-cap";
 import type { ClerkView } from "./clerk-view";
 import { defaultScheduleSettings } from "./default-schedule-settings";
@@ -38,7 +39,7 @@ export async function loadClerkView({
     defaultSettings: defaultScheduleSettings,
     published,
     versions,
-    calls,
+    calls: published ? callsOnSheet(calls, published.body) : [],
     flagged: published ? flagPublishedDrives(published.body, cars) : [],
     now: now.toISOString(),
   };

@@ -1,5 +1,4 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { listEntryContacts } from "../../db/queries/list-entry-contacts";
 import { getLatestRunSheet } from "../../db/queries/run-sheets/get-latest-run-sheet";
@@ -8,25 +7,25 @@ import { insertRunSheet } from "../../db/queries/run-sheets/insert-run-sheet";
 import { runTransaction } from "../../db/run-transaction";
 import { env } from "../env";
 import { AppError } from "../errors";
-import { SEND_MAIL, type SendMailPayload } from "../jobs/job-kinds";
-import { composeRunSheetMail } from "../mail/compose-run-sheet-mail";
 import { buildSchedule } from "../paddock/build-schedule";
 import { checkRunGroups } from "../paddock/check-run-groups";
 import { changedEntryIds, diffRunSheets, type RunSheetDiff } from "../paddock/diff-run-sheets";
 import type { RunSheet } from "../paddock/run-sheet-schema";
-import { describeEntryChanges } from "./describe-entry-changes";
-import { entrySessions } from "./entry-sessions";
+import { stableStringify } from "../scrutineer/records/stable-stringify";
 import { eventCap } from "./load-clerk-view";
 import { loadEventCars } from "./load-event-cars";
 import { publishProblems } from "./publish-problems";
-import { runSheetIcs } from "./run-sheet-ics";
+import { runSheetMailJobs } from "./run-sheet-mail-jobs";
 
 /**
  * Publish the clerk of course's draft as the event's next run-sheet version. Refused, with what to
  * do, when the draft is stale, holds a car that is not ready to run, leaves a ready car out, or
  * breaks a blocking rule. Otherwise the sheet (groups, schedule, explanations) is stored immutable
  * and, in the same transaction, every entrant whose group or session times changed is e-mailed
- * with an iCalendar file of their sessions — once per publication, whatever was edited before it.
+ * with an iCalendar file of their sessions, and every entrant taken off the sheet is told and sent
+ * a file that cancels their sessions — once per publication, whatever was edited before it. Two
+ * publishes at once: the second is refused (the version it was diffed against is no longer the
+ * latest), so nobody is mailed twice.
  */
 export async function publishRunSheet({
   eventId,
@@ -90,50 +89,34 @@ export async function publishRunSheet({
             source: `${draft.capCars} cars: set by the clerk of course for this event`,
           },
   };
+  if (previous && stableStringify(previous.body) === stableStringify(body)) {
+    throw new AppError(
+      "conflict",
+      `Nothing has changed since version ${previous.version} was published: there is nothing new to publish.`,
+    );
+  }
   const diff = diffRunSheets(previous?.body ?? null, body);
-  const toMail = changedEntryIds(diff).filter((id) => body.drives.some((d) => d.entryId === id));
+  const toMail = changedEntryIds(diff);
   const contacts = await listEntryContacts({ eventId, entryIds: toMail });
   return runTransaction(async (tx) => {
-    const { version } = await insertRunSheet(tx, { eventId, body, publishedBy, publishedAt: now });
-    const mails = contacts.flatMap((contact) => {
-      const entryUrl = new URL(`/entries/${contact.entryId}`, env.APP_URL).toString();
-      const mail = composeRunSheetMail({
-        carNumber: contact.carNumber,
-        eventName: summary.name,
-        version,
-        timeZone: summary.timeZone,
-        drives: entrySessions(body, contact.entryId),
-        changes: previous ? describeEntryChanges(diff, contact.entryId, summary.timeZone) : [],
-        entryUrl,
-      });
-      const ics = runSheetIcs({
-        runSheet: body,
-        entryId: contact.entryId,
-        eventName: summary.name,
-        venueName: summary.venueName,
-        version,
-      });
-      const addresses = [contact.driverEmail, contact.coDriverEmail].filter(
-        (to, i, all): to is string => !!to && all.indexOf(to) === i,
-      );
-      return addresses.map((to) => ({
-        kind: SEND_MAIL,
-        payload: {
-          ...mail,
-          to,
-          kind: "run-sheet",
-          eventId,
-          messageId: `<${randomUUID()}@${new URL(env.APP_URL).hostname}>`,
-          attachments: [
-            {
-              filename: `car-${contact.carNumber}-sessions.ics`,
-              contentType: "text/calendar; charset=utf-8; method=PUBLISH",
-              content: ics,
-            },
-          ],
-        } satisfies SendMailPayload,
-        dedupeKey: `run-sheet:${eventId}:${version}:${contact.entryId}:${to}`,
-      }));
+    const { version } = await insertRunSheet(tx, {
+      eventId,
+      body,
+      publishedBy,
+      publishedAt: now,
+      previousVersion: previous?.version ?? null,
+    });
+    const mails = runSheetMailJobs({
+      eventId,
+      eventName: summary.name,
+      venueName: summary.venueName,
+      timeZone: summary.timeZone,
+      version,
+      sheet: body,
+      previous: previous?.body ?? null,
+      diff,
+      contacts,
+      appUrl: env.APP_URL,
     });
     await enqueueJobs(mails, tx);
     return { version, diff, mailed: mails.length, warnings: schedule.warnings };

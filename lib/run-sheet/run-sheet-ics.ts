@@ -13,9 +13,10 @@ const productId = "-//Plumbline//Run sheet//EN";
  * A calendar app recognises an event again by its UID and takes the higher SEQUENCE as the newer
  * copy (RFC 5545 §3.8.4.7, §3.8.7.4). The UID names the drive and the round, not the group, so
  * when a republication moves the driver to another group or time the same event is updated
- * instead of a second one appearing; SEQUENCE is the run sheet's version. A session that no
- * longer exists (fewer rounds, or the driver withdrawn) is not cancelled in the calendar: a file
- * can only say what is, so the e-mail with the new file says what changed.
+ * instead of a second one appearing; SEQUENCE is the run sheet's version. With `cancelled`, the
+ * same events (from the sheet the car was last on) go out as cancelled (METHOD:CANCEL, STATUS:
+ * CANCELLED, RFC 5546 §3.2.5) with the new version's SEQUENCE, so a calendar drops the sessions of
+ * a car taken off the run sheet.
  * @throws RangeError when the entry has no drive on the sheet, or the package rejects the events
  */
 export function runSheetIcs({
@@ -24,6 +25,7 @@ export function runSheetIcs({
   eventName,
   venueName,
   version,
+  cancelled = false,
 }: {
   runSheet: RunSheet;
   entryId: string;
@@ -31,6 +33,8 @@ export function runSheetIcs({
   venueName: string;
   /** The publication's version (1, 2, …): the events' SEQUENCE. */
   version: number;
+  /** The car is no longer on the run sheet: cancel these sessions. */
+  cancelled?: boolean;
 }): string {
   const drives = runSheet.drives.filter((d) => d.entryId === entryId);
   if (drives.length === 0) throw new RangeError(`Entry ${entryId} has no drive on this run sheet`);
@@ -38,7 +42,7 @@ export function runSheetIcs({
   const common = {
     location: venueName,
     sequence: version,
-    status: "CONFIRMED" as const,
+    status: cancelled ? ("CANCELLED" as const) : ("CONFIRMED" as const),
     startInputType: "utc" as const,
     startOutputType: "utc" as const,
     endInputType: "utc" as const,
@@ -78,7 +82,7 @@ export function runSheetIcs({
 
   const { error, value } = createEvents(events, {
     productId,
-    method: "PUBLISH",
+    method: cancelled ? "CANCEL" : "PUBLISH",
     calName: `${eventName}: car ${drives[0]?.carNumber ?? ""}`,
   });
   if (error !== null || value === null) {

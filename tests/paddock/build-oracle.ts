@@ -90,13 +90,15 @@ export function oracleScore(drives: Drive[], groupOf: number[], groupCount: numb
     groups[g]?.push(i);
   });
   let backToBack = 0;
+  let roundWrap = 0;
   for (let i = 0; i < drives.length; i++)
-    for (let j = i + 1; j < drives.length; j++)
-      if (
-        conflict(drives[i] as Drive, drives[j] as Drive) &&
-        Math.abs((groupOf[i] ?? 0) - (groupOf[j] ?? 0)) === 1
-      )
-        backToBack++;
+    for (let j = i + 1; j < drives.length; j++) {
+      if (!conflict(drives[i] as Drive, drives[j] as Drive)) continue;
+      const gap = Math.abs((groupOf[i] ?? 0) - (groupOf[j] ?? 0));
+      if (gap === 1) backToBack++;
+      // The last group and the first run back to back from one round into the next (from 4).
+      if (groupCount >= 4 && gap === groupCount - 1) roundWrap++;
+    }
   let classMix = 0;
   let classRankSpread = 0;
   let experienceSpread = 0;
@@ -128,6 +130,7 @@ export function oracleScore(drives: Drive[], groupOf: number[], groupCount: numb
   const sizeSpread = Math.max(...sizes) - Math.min(...sizes);
   const total =
     1_000_000_000 * backToBack +
+    100_000_000 * roundWrap +
     200_000 * noviceWithFastest +
     100_000 * classMix +
     30_000 * classRankSpread +
@@ -137,6 +140,7 @@ export function oracleScore(drives: Drive[], groupOf: number[], groupCount: numb
   return {
     total,
     backToBack,
+    roundWrap,
     noviceWithFastest,
     classMix,
     classRankSpread,

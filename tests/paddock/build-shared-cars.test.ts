@@ -31,6 +31,26 @@ const drive = (id: string, car: number, driver: string): Drive => ({
 });
 
 describe("shared cars", () => {
+  it("keeps a shared car out of the last group and the first, which run back to back across rounds", () => {
+    // 14 single cars and one shared car with a fast and a slow driver, 4 to a group: pace alone
+    // would put its drivers in the first and the last group. Source: DOMAIN.md §5 (HPDE run-group
+    // guidance) — back-to-back sessions for one car are avoided; the rotation runs round after
+    // round, so the last group of a round is followed by the first (common practice (no source)).
+    const drives: Drive[] = Array.from({ length: 14 }, (_, k) => ({
+      ...drive(`e${k}:1`, k + 1, `p${k}`),
+      entryId: `e${k}`,
+      lapTimeMs: 90_000 + k * 1_000,
+    }));
+    drives.push({ ...drive("s:1", 99, "ps1"), entryId: "s", lapTimeMs: 89_000 });
+    drives.push({ ...drive("s:2", 99, "ps2"), entryId: "s", lapTimeMs: 106_000 });
+    const plan = buildRunGroups({ drives, capCars: 4 });
+    const at = groupIndex(plan);
+    expect(plan.groups).toHaveLength(4);
+    const gap = Math.abs((at.get("s:1") ?? 0) - (at.get("s:2") ?? 0));
+    expect(gap).toBe(2);
+    expect(plan.score.roundWrap).toBe(0);
+  });
+
   it("keeps a shared car's two drivers in different, non-adjacent groups when 3 or more groups run", () => {
     fc.assert(
       fc.property(

@@ -168,15 +168,46 @@ describe("building, moving and publishing run groups", () => {
     expect(mails[0]?.text).toMatch(/moved from .+ to /);
   });
 
-  it("publishing again with nothing changed e-mails nobody", async () => {
+  it("publishing again with nothing changed is refused, and mails nobody", async () => {
     const current = await view();
-    const published = await clerkAct("publishRunSheetAction", {
+    const since = Date.now();
+    const again = await clerkAct("publishRunSheetAction", {
       revision: String(current.draft?.revision),
     });
-    if (published.status !== "published") throw new Error(JSON.stringify(published));
-    expect(published.mailed).toBe(0);
-    expect(published.diff.moved).toEqual([]);
-    expect(published.diff.timesChanged).toEqual([]);
+    expect(again).toMatchObject({
+      status: "error",
+      message: expect.stringMatching(/^Nothing has changed since version \d+/),
+    });
+    expect((await view()).versions[0]?.version).toBe(current.versions[0]?.version);
+    await waitForQueueIdle(databaseUrl);
+    expect((await listMail(mailboxUrl, since)).filter((m) => /run sheet/.test(m.subject))).toEqual(
+      [],
+    );
+  });
+
+  it("two publishes of one draft at once make one version and mail nobody twice", async () => {
+    const current = await view();
+    const groups = current.draft?.groups ?? [];
+    // Swap the first two groups' order: every entrant of both has new times.
+    const swapped = [groups[1], groups[0], ...groups.slice(2)];
+    const saved = await clerkAct("saveRunGroupsAction", {
+      groups: JSON.stringify(swapped),
+      settings,
+      revision: String(current.draft?.revision),
+    });
+    if (saved.status !== "saved") throw new Error(JSON.stringify(saved));
+    const since = Date.now();
+    const answers = await Promise.all(
+      [1, 2].map(() => clerkAct("publishRunSheetAction", { revision: String(saved.revision) })),
+    );
+    const published = answers.filter((a) => a.status === "published");
+    expect(published).toHaveLength(1);
+    expect(answers.filter((a) => a.status === "error")).toHaveLength(1);
+    await waitForQueueIdle(databaseUrl);
+    const mails = (await listMail(mailboxUrl, since)).filter((m) => /run sheet/.test(m.subject));
+    const keys = mails.map((m) => `${m.to.join(",")} ${m.subject}`);
+    expect(new Set(keys).size).toBe(keys.length);
+    expect(mails.length).toBe(published[0]?.status === "published" ? published[0].mailed : -1);
   });
 
   it("refuses to publish a car that is not ready, and a stale draft", async () => {
@@ -235,6 +266,24 @@ describe("during the day", () => {
     expect((await view()).calls.map((c) => [c.sessionKey, c.state])).toEqual([["1-1", "on-track"]]);
   });
 
+  it("a mark follows its group when a later version reorders the groups", async () => {
+    const current = await view();
+    const groups = current.draft?.groups ?? [];
+    const first = groups[0]?.name;
+    const saved = await clerkAct("saveRunGroupsAction", {
+      groups: JSON.stringify([groups[1], groups[0], ...groups.slice(2)]),
+      settings,
+      revision: String(current.draft?.revision),
+    });
+    if (saved.status !== "saved") throw new Error(JSON.stringify(saved));
+    const published = await clerkAct("publishRunSheetAction", { revision: String(saved.revision) });
+    expect(published.status).toBe("published");
+    const after = await view();
+    expect(after.published?.body.groups[1]?.name).toBe(first);
+    // The group that was on track is now second in the rotation: its mark says 1-2.
+    expect(after.calls.map((c) => [c.sessionKey, c.state])).toEqual([["1-2", "on-track"]]);
+  });
+
   it("a re-inspection sends a published car back to Waiting until the chief closes it", async () => {
     const current = await view();
     const target = current.cars.find((c) => c.ready && c.status === "cleared");
@@ -254,6 +303,33 @@ describe("during the day", () => {
       /^Sent back for re-inspection after an incident, asked by Clerk of course/,
     );
     expect(during.flagged.map((f) => f.entryId)).toContain(target.entryId);
+    // The clerk takes the car off the sheet: its drivers are told, and their sessions cancelled.
+    const groups = (during.draft?.groups ?? []).map((g) => ({
+      ...g,
+      driveIds: g.driveIds.filter((id) => !id.startsWith(`${target.entryId}:`)),
+    }));
+    const saved = await clerkAct("saveRunGroupsAction", {
+      groups: JSON.stringify(groups),
+      settings,
+      revision: String(during.draft?.revision),
+    });
+    if (saved.status !== "saved") throw new Error(JSON.stringify(saved));
+    const since = Date.now();
+    const published = await clerkAct("publishRunSheetAction", { revision: String(saved.revision) });
+    if (published.status !== "published") throw new Error(JSON.stringify(published));
+    await waitForQueueIdle(databaseUrl);
+    const told = (await listMail(mailboxUrl, since)).filter((m) =>
+      m.subject.startsWith(
+        `Car ${target.carNumber}: not on run sheet version ${published.version}`,
+      ),
+    );
+    expect(told.length).toBeGreaterThan(0);
+    // Source: RFC 5546 §3.2.5 (iTIP CANCEL), read by ical.js: the same events, cancelled.
+    const cancel = new ICAL.Component(ICAL.parse(told[0]?.attachments?.[0]?.content ?? ""));
+    expect(cancel.getFirstPropertyValue("method")).toBe("CANCEL");
+    const cancelled = cancel.getAllSubcomponents("vevent");
+    expect(cancelled.length).toBeGreaterThan(0);
+    for (const e of cancelled) expect(e.getFirstPropertyValue("status")).toBe("CANCELLED");
     const open = car?.reinspection?.id ?? "";
     const close = (note: string) =>
       act(chief, `${CHIEF_ACTIONS}#closeReinspectionAction`, `/tech/${fx.eventId}/chief`, {

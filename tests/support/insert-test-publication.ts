@@ -104,9 +104,23 @@ export async function insertTestSessionCall(
   const id = randomUUID();
   await queryTestDb(
     databaseUrl,
-    `insert into session_calls (id, event_id, session_key, state, note, called_at, called_by)
-     values (?, ?, ?, ?, ?, ?, ?)`,
-    [id, call.eventId, call.sessionKey, call.state, call.note, call.at, clerk?.id],
+    `insert into session_calls
+       (id, event_id, session_key, group_name, round, state, note, called_at, called_by)
+     select ?, ?, ?, json_unquote(json_extract(p.body, concat('$.groups[', ? - 1, '].name'))), ?,
+            ?, ?, ?, ?
+       from run_group_publications p where p.event_id = ? order by p.version desc limit 1`,
+    [
+      id,
+      call.eventId,
+      call.sessionKey,
+      Number(call.sessionKey.split("-")[1]),
+      Number(call.sessionKey.split("-")[0]),
+      call.state,
+      call.note,
+      call.at,
+      clerk?.id,
+      call.eventId,
+    ],
   );
   return id;
 }

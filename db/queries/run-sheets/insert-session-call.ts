@@ -8,6 +8,8 @@ import { sessionCalls } from "../../schema";
 export async function insertSessionCall({
   eventId,
   sessionKey,
+  groupName,
+  round,
   state,
   note,
   calledAt,
@@ -15,12 +17,22 @@ export async function insertSessionCall({
 }: {
   eventId: string;
   sessionKey: string;
+  groupName: string;
+  round: number;
   state: SessionCallState;
   note: string | null;
   calledAt: Date;
   calledBy: string;
 }): Promise<void> {
-  await getDb()
-    .insert(sessionCalls)
-    .values({ id: uuidv7(), eventId, sessionKey, state, note, calledAt, calledBy });
+  await getDb().insert(sessionCalls).values({
+    id: uuidv7(),
+    eventId,
+    sessionKey,
+    groupName,
+    round,
+    state,
+    note,
+    calledAt,
+    calledBy,
+  });
 }
