@@ -1,10 +1,13 @@
 import type { Metadata } from "next";
+import { FlaggedDrivesBlock } from "@/components/print/flagged-drives-block";
 import { PrintSheet } from "@/components/print/print-sheet";
 import { RunSheetSheet } from "@/components/print/run-sheet-sheet";
 import { listEventOfficials } from "@/db/queries/list-event-officials";
 import { getLatestRunSheet } from "@/db/queries/run-sheets/get-latest-run-sheet";
 import { loadEventPage } from "@/lib/auth/load-event-page";
 import { describeIssueTime } from "@/lib/results/describe-issue-time";
+import { flagPublishedDrives } from "@/lib/run-sheet/flag-published-drives";
+import { loadEventCars } from "@/lib/run-sheet/load-event-cars";
 import { shapeRunSheetPrint } from "@/lib/run-sheet/shape-run-sheet-print";
 
 export const metadata: Metadata = { title: "Run sheet (print)" };
@@ -25,10 +28,12 @@ export default async function RunSheetPrintPage({
     permission: "entries.read",
     returnTo: `/clerk/${eventId}/print/run-sheet`,
   });
-  const [publication, officials] = await Promise.all([
+  const [publication, officials, { cars }] = await Promise.all([
     getLatestRunSheet({ eventId }),
     listEventOfficials({ eventId }),
+    loadEventCars({ eventId }),
   ]);
+  const flagged = publication ? flagPublishedDrives(publication.body, cars) : [];
   const sheet = publication ? shapeRunSheetPrint(publication) : null;
   const publisher = publication
     ? officials.find((o) => o.userId === publication.publishedBy)
@@ -47,7 +52,10 @@ export default async function RunSheetPrintPage({
       csvHref={`/api/events/${eventId}/run-sheet/csv`}
     >
       {sheet ? (
-        <RunSheetSheet sheet={sheet} />
+        <>
+          <FlaggedDrivesBlock flagged={flagged} />
+          <RunSheetSheet sheet={sheet} />
+        </>
       ) : (
         <p className="text-lg">The clerk of course has not published a run sheet yet.</p>
       )}
