@@ -9,6 +9,8 @@ export function EntryRunGroup({
   version,
   publishedAtText,
   timeZone,
+  dateText,
+  briefingText,
   drives,
 }: {
   entryId: string;
@@ -16,6 +18,9 @@ export function EntryRunGroup({
   version: number | null;
   publishedAtText: string | null;
   timeZone: string;
+  /** The event's date ("Sat 12 Jun 2027") and the briefing's time, if any. */
+  dateText: string | null;
+  briefingText: string | null;
   drives: EntryDriveSessions[];
 }) {
   return (
@@ -39,14 +44,31 @@ export function EntryRunGroup({
         </p>
       ) : (
         <>
-          <ul className="space-y-2">
+          <p className="text-lg">
+            {dateText}
+            {briefingText ? (
+              <>
+                {" "}
+                · drivers&apos; briefing{" "}
+                <span className="tabular font-semibold">{briefingText}</span>
+              </>
+            ) : null}
+          </p>
+          <ul className="space-y-3">
             {drives.map((d) => (
               <li key={d.driveId} className="text-lg" data-testid="entry-drive">
                 <strong>{d.driverName}</strong>:{" "}
-                <strong data-testid="entry-group">{d.groupName}</strong> —{" "}
-                <span className="tabular">
-                  {d.sessions.map((s) => formatSessionSpan(s, timeZone)).join(", ") ||
-                    "no session fits the day"}
+                <strong className="text-xl" data-testid="entry-group">
+                  {d.groupName}
+                </strong>
+                <span className="mt-1 flex flex-wrap gap-x-4 gap-y-1 tabular">
+                  {d.sessions.length === 0
+                    ? "no session fits the day"
+                    : d.sessions.map((s) => (
+                        <span key={s.key} className="whitespace-nowrap">
+                          R{s.round} {formatSessionSpan(s, timeZone)}
+                        </span>
+                      ))}
                 </span>
               </li>
             ))}

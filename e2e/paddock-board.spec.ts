@@ -134,15 +134,17 @@ test("offline after a load the board still shows the run sheet and says how old 
   });
   const page = await context.newPage();
   await openBoard(page);
-  // Once the service worker controls the page, a navigation saves the page for offline use.
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-  });
-  await expect
-    .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null))
-    .toBe(true);
-  await page.reload();
+  // From the first visit (no reload while online), the board keeps its own page for a reload
+  // with no signal: a TV switched on once in the morning must survive the signal going.
   await expect(page.getByTestId("board-heard")).toContainText("Live.");
+  await expect
+    .poll(() =>
+      page.evaluate(
+        async (path) => (await (await caches.open("plumbline-pages")).match(path)) !== undefined,
+        `/board/${sheet.eventId}`,
+      ),
+    )
+    .toBe(true);
   // The screen keeps the board it heard in IndexedDB.
   await expect
     .poll(() =>

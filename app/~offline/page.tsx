@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackOnlineReload } from "@/components/back-online-reload";
 
 export const metadata: Metadata = { title: "No signal" };
 
@@ -12,6 +13,8 @@ export default function OfflinePage() {
         on the tech line still open, and everything you recorded is kept on the phone until it can
         be sent.
       </p>
+      <p>This page opens again by itself when the signal is back.</p>
+      <BackOnlineReload />
     </div>
   );
 }

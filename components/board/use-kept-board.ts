@@ -3,6 +3,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import type { BoardSnapshot } from "@/lib/board/board-schema";
 import { loadBoardSnapshot, saveBoardSnapshot } from "@/lib/offline/board-snapshot";
+import { keepPageForOffline } from "@/lib/offline/keep-page-for-offline";
 import { boardKeys } from "@/lib/query/board-queries";
 
 const readAt = (s: BoardSnapshot) => Date.parse(s.board.updatedAt);
@@ -32,4 +33,8 @@ export function useKeptBoard(eventId: string, data: BoardSnapshot | undefined): 
   useEffect(() => {
     if (loaded && data) void saveBoardSnapshot(eventId, data).catch(() => undefined);
   }, [loaded, data, eventId]);
+  // The board's own page, kept for a reload with no signal from the first visit on.
+  useEffect(() => {
+    void keepPageForOffline(`/board/${eventId}`).catch(() => undefined);
+  }, [eventId]);
 }

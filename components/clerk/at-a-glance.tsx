@@ -32,12 +32,6 @@ export function AtAGlance({ cars }: { cars: ClerkCar[] }) {
       look: "border-cleared-line bg-cleared-soft text-cleared",
     },
     {
-      label: "Moved up",
-      count: movedUp.length,
-      icon: <MovedUpIcon />,
-      look: "border-cleared-line bg-cleared-soft text-cleared",
-    },
-    {
       label: "Held",
       count: held.length,
       icon: <StoppedIcon />,
@@ -54,6 +48,12 @@ export function AtAGlance({ cars }: { cars: ClerkCar[] }) {
       count: notSignedOn.length,
       icon: <AttentionIcon />,
       look: "border-attention-line bg-attention-soft text-attention",
+    },
+    {
+      label: "Of these, moved up a class",
+      count: movedUp.length,
+      icon: <MovedUpIcon />,
+      look: "border-cleared-line bg-cleared-soft text-cleared",
     },
   ];
   return (

@@ -8,6 +8,7 @@ import type { ClerkView } from "@/lib/run-sheet/clerk-view";
 import { Caution } from "../caution";
 import { ActionMessage } from "./action-message";
 import { AtAGlance } from "./at-a-glance";
+import { carStateWhy } from "./car-state-why";
 import { type ClerkAction, type ClerkActions, formOf } from "./clerk-actions";
 import { ExportLinks } from "./export-links";
 import { FlaggedList } from "./flagged-list";
@@ -62,6 +63,18 @@ export function ClerkDeskView({
     () => new Map(view.flagged.map((f) => [f.driveId, f.why])),
     [view.flagged],
   );
+  const notReady = useMemo(() => {
+    const cars = new Map(view.cars.map((c) => [c.entryId, c]));
+    const ready = new Set(view.drives.map((d) => d.driveId));
+    const out = new Map<string, { carNumber: number; why: string }>();
+    for (const id of draft.groups.flatMap((g) => g.driveIds)) {
+      if (ready.has(id)) continue;
+      const car = cars.get(id.split(":")[0] ?? "");
+      if (car)
+        out.set(id, { carNumber: car.carNumber, why: carStateWhy(car) ?? "Not ready to run." });
+    }
+    return out;
+  }, [view.cars, view.drives, draft.groups]);
   const live = useMemo(
     () =>
       view.published
@@ -106,6 +119,7 @@ export function ClerkDeskView({
       {view.published ? (
         <SessionCallsPanel
           live={live}
+          now={now}
           groupNames={view.published.body.groups.map((g) => g.name)}
           timeZone={tz}
           pending={busy === "call"}
@@ -122,9 +136,13 @@ export function ClerkDeskView({
         readyDrives={view.drives.length}
         pending={busy === "build"}
         onSettings={draft.changeSettings}
-        onBuild={(settings) =>
-          run("build", actions.build, { settings: JSON.stringify(settings), revision })
-        }
+        onBuild={async (settings) => {
+          const settled = await draft.settle();
+          await run("build", actions.build, {
+            settings: JSON.stringify(settings),
+            revision: settled === null ? "" : String(settled),
+          });
+        }}
       />
       {answers.build ? <ActionMessage state={answers.build} testId="build-message" /> : null}
       <section className="space-y-3" aria-labelledby="groups-heading">
@@ -163,6 +181,7 @@ export function ClerkDeskView({
               explanations={preview.explanations}
               notes={preview.notes}
               flagged={flagged}
+              notReady={notReady}
               onChange={draft.change}
               carControls={(drive) => (
                 <ReinspectionForm

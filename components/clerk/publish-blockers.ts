@@ -29,7 +29,7 @@ export function publishBlockers({
   const blocking = notes.filter((n) => n.kind === "blocks").length;
   if (blocking > 0) {
     out.push(
-      `${blocking} broken rule${blocking === 1 ? "" : "s"} block publishing (see the warnings).`,
+      `${blocking} broken rule${blocking === 1 ? " blocks" : "s block"} publishing (see the warnings above the groups).`,
     );
   }
   if (saving) out.push("Saving the draft…");

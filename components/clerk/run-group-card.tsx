@@ -4,6 +4,7 @@ import type { Drive } from "@/lib/paddock/drive";
 import type { RunGroup } from "@/lib/paddock/run-group-plan";
 import { DriveTile } from "./drive-tile";
 import { formatClockTime } from "./format-clock-time";
+import { NotReadyTile } from "./not-ready-tile";
 
 export type GroupSession = { round: number; startsAt: string; endsAt: string };
 
@@ -22,6 +23,8 @@ export function RunGroupCard({
   selectedDriveId,
   onSelect,
   onMoveGroup,
+  notReady,
+  onTakeOut,
 }: {
   group: RunGroup;
   index: number;
@@ -36,6 +39,9 @@ export function RunGroupCard({
   selectedDriveId: string | null;
   onSelect: (driveId: string) => void;
   onMoveGroup: (index: number, step: -1 | 1) => void;
+  /** Cars in the draft that are not ready now, by drive id: number and why. */
+  notReady: Map<string, { carNumber: number; why: string }>;
+  onTakeOut: (driveId: string) => void;
 }) {
   const { setNodeRef, isOver } = useDroppable({ id: `group-${index}`, data: { index } });
   const over = group.driveIds.length > capCars;
@@ -93,10 +99,15 @@ export function RunGroupCard({
         {group.driveIds.map((driveId) => {
           const drive = drivesById.get(driveId);
           if (!drive) {
+            const car = notReady.get(driveId);
             return (
-              <li key={driveId} className="text-base font-semibold text-stopped">
-                A drive no longer ready to run ({driveId}): move it out or build again.
-              </li>
+              <NotReadyTile
+                key={driveId}
+                driveId={driveId}
+                carNumber={car?.carNumber ?? null}
+                why={car?.why ?? "No longer in the event."}
+                onTakeOut={onTakeOut}
+              />
             );
           }
           return (

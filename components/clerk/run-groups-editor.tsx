@@ -27,6 +27,7 @@ export function RunGroupsEditor({
   explanations,
   notes,
   flagged,
+  notReady,
   onChange,
   carControls,
 }: {
@@ -38,6 +39,8 @@ export function RunGroupsEditor({
   explanations: Record<string, string>;
   notes: ConstraintNote[];
   flagged: Map<string, string>;
+  /** Cars in the draft that are not ready now, by drive id (see RunGroupCard). */
+  notReady: Map<string, { carNumber: number; why: string }>;
   onChange: (groups: RunGroup[], what: string) => void;
   /** More for the selected car, under "Move to" (such as "Ask for re-inspection"). */
   carControls?: (drive: Drive) => ReactNode;
@@ -61,6 +64,10 @@ export function RunGroupsEditor({
   const onDragEnd = (event: DragEndEvent) => {
     const toIndex = event.over?.data.current?.index;
     if (typeof toIndex === "number") move(String(event.active.id), toIndex);
+  };
+  const takeOut = (driveId: string) => {
+    const next = groups.map((g) => ({ ...g, driveIds: g.driveIds.filter((id) => id !== driveId) }));
+    onChange(next, `Car ${notReady.get(driveId)?.carNumber ?? ""} taken out of the run groups`);
   };
   const onMoveGroup = (index: number, step: -1 | 1) => {
     const next = moveGroup(groups, index, step);
@@ -95,6 +102,8 @@ export function RunGroupsEditor({
               selectedDriveId={selected}
               onSelect={(id) => setSelected((current) => (current === id ? null : id))}
               onMoveGroup={onMoveGroup}
+              notReady={notReady}
+              onTakeOut={takeOut}
             />
           ))}
         </div>

@@ -2,6 +2,7 @@
 import { useState } from "react";
 import type { LiveSession } from "@/lib/paddock/live-session";
 import type { SessionCallState } from "@/lib/paddock/session-call";
+import { sessionCallProblem } from "@/lib/paddock/session-call-problem";
 import { formatClockTime } from "./format-clock-time";
 
 export const sessionStateLabels: Record<LiveSession["state"], string> = {
@@ -85,7 +86,13 @@ export function SessionCallRow({
                 ? "btn border-2 border-stopped bg-stopped-soft text-stopped"
                 : "btn-secondary"
             }
-            disabled={pending || session.state === state}
+            disabled={
+              pending ||
+              sessionCallProblem({
+                current: session.state,
+                next: state,
+              }) !== null
+            }
             onClick={() => {
               if (needsNote(state) && note.trim() === "") {
                 setNoteMissing(true);

@@ -16,15 +16,24 @@ export function SessionCallsPanel({
   groupNames,
   timeZone,
   pending,
+  now,
   onCall,
 }: {
   live: LiveSession[];
+  /** The server's clock (ISO), as this screen keeps it. */
+  now: string;
   groupNames: string[];
   timeZone: string;
   pending: boolean;
   onCall: (sessionKey: string, state: SessionCallState, note: string) => void;
 }) {
-  const current = live.filter((s) => !ended(s)).slice(0, 2);
+  // The next two sessions, and the last one that ended in the past 15 minutes (a finish marked by
+  // mistake can still be put back on track).
+  const nowMs = Date.parse(now);
+  const lastEnded = live.filter(ended).at(-1);
+  const recent =
+    lastEnded && nowMs - Date.parse(lastEnded.expectedEndsAt) < 15 * 60_000 ? [lastEnded] : [];
+  const current = [...recent, ...live.filter((s) => !ended(s)).slice(0, 2)];
   const name = (s: LiveSession) => groupNames[s.groupIndex - 1] ?? `Group ${s.groupIndex}`;
   const t = (iso: string) => formatClockTime(iso, timeZone);
   return (

@@ -1,5 +1,8 @@
 import type { FieldErrors } from "@/lib/errors";
-import { type ScheduleSettings, scheduleSettingsSchema } from "@/lib/paddock/schedule-settings";
+import {
+  checkedScheduleSettingsSchema,
+  type ScheduleSettings,
+} from "@/lib/paddock/schedule-settings";
 
 export type SettingsRead =
   | { ok: true; settings: ScheduleSettings }
@@ -26,7 +29,7 @@ export function settingsFromForm(form: FormData): SettingsRead {
         ? { start: text("briefingStart"), minutes: whole(form.get("briefingMinutes")) }
         : null,
   };
-  const parsed = scheduleSettingsSchema.safeParse(candidate);
+  const parsed = checkedScheduleSettingsSchema.safeParse(candidate);
   if (parsed.success) return { ok: true, settings: parsed.data };
   const fields: FieldErrors = {};
   for (const issue of parsed.error.issues) {

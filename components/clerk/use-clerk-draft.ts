@@ -18,6 +18,9 @@ export type DraftState = {
   last: ClerkActionState;
   change: (groups: RunGroup[]) => void;
   changeSettings: (settings: ScheduleSettings) => void;
+  /** Before building: drop a settings save still waiting to start (the build saves the settings
+   *  itself), wait for saves under way, and answer the revision the server has now. */
+  settle: () => Promise<number | null>;
   /** Drop local changes and show the draft as the server has it. */
   reload: () => void;
 };
@@ -110,6 +113,14 @@ export function useClerkDraft({
       // Saving from the first keystroke: publishing waits until the settings typed are saved.
       setSaving(true);
       settingsTimer.current = setTimeout(saveLatest, 800);
+    },
+    settle: async () => {
+      if (settingsTimer.current) clearTimeout(settingsTimer.current);
+      settingsTimer.current = null;
+      await queue.current;
+      if (inFlight.current === 0) setSaving(false);
+      const revision = latest.current?.revision ?? current?.revision ?? null;
+      return revision === null || revision < 0 ? null : revision;
     },
     reload: () => {
       latest.current = null;

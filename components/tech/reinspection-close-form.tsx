@@ -8,6 +8,8 @@ export type CloseReinspectionState = {
   status: "idle" | "error" | "done";
   message?: string;
   fields?: FieldErrors;
+  /** What the chief typed, kept when the server refuses (a refused form is not emptied). */
+  note?: string;
 };
 
 /** One open re-inspection on the chief scrutineer's page, with the form that closes it. The server
@@ -51,6 +53,8 @@ export function ReinspectionCloseForm({
           What the re-inspection found
         </label>
         <input
+          key={`${state.status}:${state.message ?? ""}`}
+          defaultValue={state.status === "error" ? state.note : ""}
           id={noteId}
           name="note"
           className="field-input"

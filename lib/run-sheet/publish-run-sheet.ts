@@ -11,6 +11,8 @@ import { buildSchedule } from "../paddock/build-schedule";
 import { checkRunGroups } from "../paddock/check-run-groups";
 import { changedEntryIds, diffRunSheets, type RunSheetDiff } from "../paddock/diff-run-sheets";
 import type { RunSheet } from "../paddock/run-sheet-schema";
+import { checkedScheduleSettingsSchema } from "../paddock/schedule-settings";
+import { zonedWallTime } from "../paddock/zoned-wall-time";
 import { stableStringify } from "../scrutineer/records/stable-stringify";
 import { eventCap } from "./load-clerk-view";
 import { loadEventCars } from "./load-event-cars";
@@ -61,12 +63,30 @@ export async function publishRunSheet({
   if (problems.length > 0 || blocking.length > 0) {
     throw new AppError("conflict", `Not published: ${[...problems, ...blocking].join(" ")}`);
   }
+  const settingsProblems = checkedScheduleSettingsSchema.safeParse(draft.settings);
+  if (!settingsProblems.success) {
+    throw new AppError(
+      "conflict",
+      `Not published: ${settingsProblems.error.issues.map((i) => i.message).join(" ")}`,
+    );
+  }
   const schedule = buildSchedule({
     eventDate: summary.eventDate,
     timeZone: summary.timeZone,
     settings: draft.settings,
     groupCount: draft.groups.length,
   });
+  const dayEnds = zonedWallTime({
+    date: summary.eventDate,
+    time: draft.settings.dayEnd,
+    timeZone: summary.timeZone,
+  }).utcMs;
+  if (schedule.sessions.some((s) => Date.parse(s.endsAt) > dayEnds)) {
+    throw new AppError(
+      "conflict",
+      `Not published: sessions would run past the end of the day (${draft.settings.dayEnd}). Choose fewer rounds or "as many as fit", or a later end. ${schedule.warnings.join(" ")}`.trim(),
+    );
+  }
   const body: RunSheet = {
     timeZone: summary.timeZone,
     eventDate: summary.eventDate,

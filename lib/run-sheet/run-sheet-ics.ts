@@ -72,8 +72,8 @@ export function runSheetIcs({
       events.push({
         ...common,
         uid: `${drive.driveId}-round-${session.round}@plumbline`,
-        title: `${eventName}: ${group.name} group, round ${session.round}${label(drive, shared)}`,
-        description: `Car ${drive.carNumber}, ${drive.driverName}: ${group.name} group, round ${session.round} of ${rounds}. Run sheet version ${version}. ${later}`,
+        title: `${eventName}: ${group.name}, round ${session.round}${label(drive, shared)}`,
+        description: `Car ${drive.carNumber}, ${drive.driverName}: ${group.name}, round ${session.round} of ${rounds}. Run sheet version ${version}. ${later}`,
         start: Date.parse(session.startsAt),
         end: Date.parse(session.endsAt),
       });

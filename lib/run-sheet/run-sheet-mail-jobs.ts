@@ -7,6 +7,8 @@ import type { RunSheetDiff } from "../paddock/diff-run-sheets";
 import type { RunSheet } from "../paddock/run-sheet-schema";
 import { describeEntryChanges } from "./describe-entry-changes";
 import { entrySessions } from "./entry-sessions";
+import { formatEventDate } from "./format-event-date";
+import { formatSessionSpan } from "./format-session-span";
 import { runSheetIcs } from "./run-sheet-ics";
 
 type Contact = {
@@ -36,6 +38,7 @@ export function runSheetMailJobs(args: {
 }): NewJob[] {
   const { sheet, previous, version } = args;
   const host = new URL(args.appUrl).hostname;
+  const briefing = sheet.blocks.find((b) => b.kind === "briefing");
   return args.contacts.flatMap((contact) => {
     const entryUrl = new URL(`/entries/${contact.entryId}`, args.appUrl).toString();
     const onSheet = sheet.drives.some((d) => d.entryId === contact.entryId);
@@ -52,8 +55,17 @@ export function runSheetMailJobs(args: {
           eventName: args.eventName,
           version,
           timeZone: args.timeZone,
+          dateText: formatEventDate(sheet.eventDate),
+          briefingText: briefing ? formatSessionSpan(briefing, args.timeZone) : null,
           drives: entrySessions(sheet, contact.entryId),
-          changes: previous ? describeEntryChanges(args.diff, contact.entryId, args.timeZone) : [],
+          changes: previous
+            ? describeEntryChanges(
+                args.diff,
+                contact.entryId,
+                args.timeZone,
+                entrySessions(sheet, contact.entryId).map((d) => d.groupName),
+              )
+            : [],
           entryUrl,
         })
       : composeRunSheetRemovalMail({

@@ -8,10 +8,14 @@ import { drives, groups } from "./clerk-fixtures";
 
 afterEach(cleanup);
 
-function renderEditor(onChange: (next: RunGroup[], what: string) => void) {
+function renderEditor(
+  onChange: (next: RunGroup[], what: string) => void,
+  withGroups: RunGroup[] = groups,
+  notReady = new Map<string, { carNumber: number; why: string }>(),
+) {
   return render(
     <RunGroupsEditor
-      groups={groups}
+      groups={withGroups}
       drives={drives}
       capCars={3}
       timeZone="Europe/London"
@@ -19,6 +23,7 @@ function renderEditor(onChange: (next: RunGroup[], what: string) => void) {
       explanations={{}}
       notes={[]}
       flagged={new Map()}
+      notReady={notReady}
       onChange={onChange}
     />,
   );
@@ -28,6 +33,27 @@ const groupNamed = (name: string) =>
   screen.getAllByTestId("run-group").find((g) => g.dataset.groupName === name) as HTMLElement;
 
 describe("the clerk moves cars and groups without dragging", () => {
+  it("shows a car that is no longer ready by number and why, and takes it out in one tap", async () => {
+    const onChange = vi.fn();
+    const withGone = groups.map((g, i) =>
+      i === 0 ? { ...g, driveIds: [...g.driveIds, "gone:1"] } : g,
+    );
+    renderEditor(
+      onChange,
+      withGone,
+      new Map([["gone:1", { carNumber: 50, why: "Re-inspection asked by the clerk (incident)." }]]),
+    );
+    const tile = screen.getByTestId("not-ready-tile");
+    expect(tile.textContent).toContain("Car 50 may not run now");
+    expect(tile.textContent).toContain("Re-inspection asked");
+    await userEvent.click(
+      within(tile).getByRole("button", { name: "Take car 50 out of the run groups" }),
+    );
+    const [next, what] = onChange.mock.calls[0] as [RunGroup[], string];
+    expect(next.flatMap((g) => g.driveIds)).not.toContain("gone:1");
+    expect(what).toBe("Car 50 taken out of the run groups");
+  });
+
   it("taps a car, then Move to Group 3: the car leaves Group 1 for Group 3", async () => {
     const onChange = vi.fn();
     renderEditor(onChange);

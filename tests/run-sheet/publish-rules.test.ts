@@ -130,9 +130,28 @@ describe("what the e-mail says changed", () => {
       ["Group 1", ["e1:1", "e2:1"]],
       ["Group 2", ["e1:2", "e4:1", "e3:1"]],
     ]);
-    const lines = describeEntryChanges(diffRunSheets(before, after), "e3", "Europe/London");
+    const lines = describeEntryChanges(diffRunSheets(before, after), "e3", "Europe/London", [
+      "Group 2",
+    ]);
     expect(lines).toEqual(["Dev Ostrander moved from Group 1 to Group 2."]);
     expect(entrySessions(after, "e3").map((d) => d.groupName)).toEqual(["Group 2"]);
-    expect(describeEntryChanges(diffRunSheets(before, after), "e2", "Europe/London")).toEqual([]);
+    expect(
+      describeEntryChanges(diffRunSheets(before, after), "e2", "Europe/London", ["Group 1"]),
+    ).toEqual([]);
+  });
+
+  it("says once per group that its times changed, never the times of a group it left", () => {
+    const before = sheet([
+      ["Group 1", ["e1:1", "e2:1", "e3:1"]],
+      ["Group 2", ["e1:2", "e4:1"]],
+    ]);
+    // Swapped in the rotation, and car 21 (e3) moved to the group that now runs first.
+    const after = sheet([
+      ["Group 2", ["e1:2", "e4:1", "e3:1"]],
+      ["Group 1", ["e1:1", "e2:1"]],
+    ]);
+    expect(
+      describeEntryChanges(diffRunSheets(before, after), "e3", "Europe/London", ["Group 2"]),
+    ).toEqual(["Dev Ostrander moved from Group 1 to Group 2.", "Group 2: session times changed."]);
   });
 });

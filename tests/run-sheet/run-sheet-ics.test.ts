@@ -63,7 +63,7 @@ describe("runSheetIcs", () => {
       ["e1:2-round-2@plumbline", "2027-06-12T10:30:00.000Z", "2027-06-12T10:50:00.000Z", 1, true],
       ["e1:2-round-3@plumbline", "2027-06-12T12:45:00.000Z", "2027-06-12T13:05:00.000Z", 1, true],
     ]);
-    expect(cal.events[1]?.summary).toBe("Spring Shoot-out: Blue group, round 1 (car 7, Ada Quill)");
+    expect(cal.events[1]?.summary).toBe("Spring Shoot-out: Blue, round 1 (car 7, Ada Quill)");
   });
 
   it("after a move the same UIDs come back with new times and a higher SEQUENCE, so a calendar updates", () => {
@@ -77,7 +77,7 @@ describe("runSheetIcs", () => {
       "2027-06-12T08:00:00.000Z",
       "2027-06-12T08:30:00.000Z",
     ]);
-    expect(after.events[1]?.summary).toBe("Spring Shoot-out: Green group, round 1 (car 21)");
+    expect(after.events[1]?.summary).toBe("Spring Shoot-out: Green, round 1 (car 21)");
   });
 
   it("on a clock-change day the instants follow the tz rules", () => {

@@ -10,10 +10,13 @@ import { requirePageUser } from "@/lib/auth/require-page-permission";
 import { loadEntryResult } from "@/lib/entries/load-entry-result";
 import { AppError } from "@/lib/errors";
 import { idSchema } from "@/lib/http/id-schema";
+import type { RunSheet } from "@/lib/paddock/run-sheet-schema";
 import { entryKeys } from "@/lib/query/entry-queries";
 import { getQueryClient } from "@/lib/query/get-query-client";
 import { entrySessions } from "@/lib/run-sheet/entry-sessions";
+import { formatEventDate } from "@/lib/run-sheet/format-event-date";
 import { formatPublishedAt } from "@/lib/run-sheet/format-published-at";
+import { formatSessionSpan } from "@/lib/run-sheet/format-session-span";
 
 export const metadata: Metadata = { title: "Your entry" };
 
@@ -52,6 +55,8 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
         version={sheet?.version ?? null}
         publishedAtText={sheet ? formatPublishedAt(sheet.publishedAt, sheet.body.timeZone) : null}
         timeZone={sheet?.body.timeZone ?? "UTC"}
+        dateText={sheet ? formatEventDate(sheet.body.eventDate) : null}
+        briefingText={briefingOf(sheet)}
         drives={sheet ? entrySessions(sheet.body, entryId) : []}
       />
       <Link href={`/entries/${entryId}/pass`} className="btn-primary w-full sm:w-auto">
@@ -64,4 +69,9 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
       </Caution>
     </div>
   );
+}
+
+function briefingOf(sheet: { body: RunSheet } | null): string | null {
+  const briefing = sheet?.body.blocks.find((b) => b.kind === "briefing");
+  return sheet && briefing ? formatSessionSpan(briefing, sheet.body.timeZone) : null;
 }

@@ -6,7 +6,7 @@ import { defineAction } from "@/lib/http/define-action";
 import { idSchema } from "@/lib/http/id-schema";
 import { jsonField } from "@/lib/http/json-field";
 import { runGroupsSchema } from "@/lib/paddock/run-group-plan";
-import { scheduleSettingsSchema } from "@/lib/paddock/schedule-settings";
+import { checkedScheduleSettingsSchema } from "@/lib/paddock/schedule-settings";
 import { sessionCallStates } from "@/lib/paddock/session-call";
 import { askReinspection } from "@/lib/reinspections/ask-reinspection";
 import { buildDraft } from "@/lib/run-sheet/build-draft";
@@ -38,7 +38,7 @@ export const buildRunGroupsAction = defineAction({
   fields: ["eventId", "settings", "revision"],
   schema: z.object({
     eventId: idSchema,
-    settings: jsonField(scheduleSettingsSchema),
+    settings: jsonField(checkedScheduleSettingsSchema),
     revision,
   }),
   access,
@@ -62,7 +62,7 @@ export const saveRunGroupsAction = defineAction({
   schema: z.object({
     eventId: idSchema,
     groups: jsonField(runGroupsSchema),
-    settings: jsonField(scheduleSettingsSchema),
+    settings: jsonField(checkedScheduleSettingsSchema),
     revision,
   }),
   access,

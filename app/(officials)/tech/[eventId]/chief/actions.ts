@@ -21,7 +21,12 @@ export const closeReinspectionAction = defineAction({
       .max(1000, "Keep it under 1,000 characters."),
   }),
   access: { permission: "verdicts.override", eventId: (form) => form.eventId },
-  refuse: ({ message, fields }): CloseReinspectionState => ({ status: "error", message, fields }),
+  refuse: ({ message, fields }, form): CloseReinspectionState => ({
+    status: "error",
+    message,
+    fields,
+    note: String(form.get("note") ?? "").slice(0, 1000),
+  }),
   handler: async ({ eventId, reinspectionId, note }, { user }): Promise<CloseReinspectionState> => {
     await finishReinspection({
       eventId,
