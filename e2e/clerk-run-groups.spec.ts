@@ -2,7 +2,7 @@ import { type Browser, expect, type Page, test } from "@playwright/test";
 import ICAL from "ical.js";
 import { demo } from "../tests/support/demo-accounts";
 import { SignInPage } from "./pages/sign-in-page";
-import { mailFor, publishedDrive } from "./support/published-drive";
+import { clearRunSheets, mailFor, publishedDrive } from "./support/published-drive";
 
 // The clerk of course's page on a desk and on a phone: build run groups from the demo day's
 // ready cars, move a car by tap-to-move, publish, drag one and tap-move another, and see the diff
@@ -72,6 +72,8 @@ async function dragCarToFirstGroup(page: Page) {
 test("the clerk builds, moves a car, publishes, and sees the diff before publishing again", async ({
   browser,
 }) => {
+  // From an empty sheet every time: version 1 mails every driver on it.
+  await clearRunSheets();
   const { context, page } = await signedIn(browser, desk);
   await expect(page.getByTestId("at-a-glance")).toBeVisible();
   await page.getByRole("button", { name: "Build run groups" }).click();

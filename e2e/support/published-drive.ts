@@ -52,3 +52,13 @@ export async function mailFor(address: string, since: number, subject: RegExp) {
   }
   throw new Error(`no mail matching ${subject} for ${address}`);
 }
+
+/** Start the run-sheet story from an empty sheet: the event's drafts, publications and session
+ *  marks removed (a fixture reset, so the spec does not depend on what ran before it). */
+export async function clearRunSheets(): Promise<void> {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error("DATABASE_URL is not set (run through scripts/e2e.sh)");
+  for (const table of ["session_calls", "run_group_publications", "run_group_drafts"]) {
+    await queryTestDb(url, `delete from ${table}`);
+  }
+}

@@ -119,7 +119,7 @@ export async function publishRunSheet({
   const toMail = changedEntryIds(diff);
   const contacts = await listEntryContacts({ eventId, entryIds: toMail });
   return runTransaction(async (tx) => {
-    const { version } = await insertRunSheet(tx, {
+    const { id: publicationId, version } = await insertRunSheet(tx, {
       eventId,
       body,
       publishedBy,
@@ -128,6 +128,7 @@ export async function publishRunSheet({
     });
     const mails = runSheetMailJobs({
       eventId,
+      publicationId,
       eventName: summary.name,
       venueName: summary.venueName,
       timeZone: summary.timeZone,

@@ -21,11 +21,13 @@ type Contact = {
 /**
  * The e-mail jobs of one publication: for each entry it changes (the caller passes their
  * contacts), one per address — the group and times with a calendar file, or, for a car no longer on
- * the sheet, a notice with a file that cancels its earlier sessions. Keyed by event, version,
- * entry and address, so the same publication never mails anyone twice.
+ * the sheet, a notice with a file that cancels its earlier sessions. Keyed by publication, entry
+ * and address, so the same publication never mails anyone twice.
  */
 export function runSheetMailJobs(args: {
   eventId: string;
+  /** The publication's own id: the e-mails' dedupe keys name it. */
+  publicationId: string;
   eventName: string;
   venueName: string;
   timeZone: string;
@@ -96,7 +98,7 @@ export function runSheetMailJobs(args: {
           },
         ],
       } satisfies SendMailPayload,
-      dedupeKey: `run-sheet:${args.eventId}:${version}:${contact.entryId}:${to}`,
+      dedupeKey: `run-sheet:${args.publicationId}:${contact.entryId}:${to}`,
     }));
   });
 }
