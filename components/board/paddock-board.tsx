@@ -2,7 +2,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { Caution } from "@/components/caution";
 import { boardDay } from "@/lib/board/board-day";
-import { formatBoardTime } from "@/lib/board/format-board-time";
+import { formatWallClock } from "@/lib/paddock/format-wall-clock";
 import { BOARD_REFETCH_MS, boardQuery } from "@/lib/query/board-queries";
 import { BoardStatusLine } from "./board-status-line";
 import { DayShifts } from "./day-shifts";
@@ -39,7 +39,7 @@ export function PaddockBoard({ eventId }: { eventId: string }) {
     ? boardDay({ runSheet: board.runSheet, calls: board.calls, timeZone: board.timeZone, now })
     : null;
   const between = day?.block
-    ? `${day.block.kind === "lunch" ? "Lunch break" : "Drivers’ briefing"} until ${formatBoardTime(day.block.endsAt, board.timeZone)}.`
+    ? `${day.block.kind === "lunch" ? "Lunch break" : "Drivers’ briefing"} until ${formatWallClock(day.block.endsAt, board.timeZone)}.`
     : "Nothing on track.";
   return (
     <div className="space-y-3 2xl:space-y-4" data-testid="paddock-board">
@@ -49,7 +49,7 @@ export function PaddockBoard({ eventId }: { eventId: string }) {
           data-testid="board-clock"
         >
           <span className="sr-only">Time at the venue: </span>
-          {formatBoardTime(now, board.timeZone)}
+          {formatWallClock(now, board.timeZone)}
         </p>
         <BoardStatusLine ageMs={ageMs} unreachable={unreachable} />
       </div>

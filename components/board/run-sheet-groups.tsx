@@ -1,5 +1,5 @@
 import type { BoardRunSheet } from "@/lib/board/board-schema";
-import { formatBoardSpan, formatBoardTime } from "@/lib/board/format-board-time";
+import { formatWallClock, formatWallClockSpan } from "@/lib/paddock/format-wall-clock";
 import type { LiveSession } from "@/lib/paddock/live-session";
 import { DriveTile } from "./drive-tile";
 
@@ -18,14 +18,14 @@ export function RunSheetGroups({
 }) {
   const blocks = runSheet.blocks.map(
     (b) =>
-      `${b.kind === "briefing" ? "Drivers’ briefing" : "Lunch"} ${formatBoardSpan(b.startsAt, b.endsAt, timeZone)}`,
+      `${b.kind === "briefing" ? "Drivers’ briefing" : "Lunch"} ${formatWallClockSpan(b.startsAt, b.endsAt, timeZone)}`,
   );
   return (
     <section aria-label="Run sheet" data-testid="run-sheet" className="space-y-2">
       <h2 className="text-2xl font-bold 2xl:text-3xl">
         Run sheet{" "}
         <span className="text-lg font-semibold text-asphalt-700 2xl:text-xl">
-          version {runSheet.version}, published {formatBoardTime(runSheet.publishedAt, timeZone)}
+          version {runSheet.version}, published {formatWallClock(runSheet.publishedAt, timeZone)}
           {blocks.length > 0 ? ` · ${blocks.join(" · ")}` : ""}
         </span>
       </h2>
@@ -50,12 +50,12 @@ export function RunSheetGroups({
                   <li key={s.key} data-session-key={s.key}>
                     R{s.round}{" "}
                     <span className="font-semibold">
-                      {formatBoardTime(s.expectedStartsAt, timeZone)}
+                      {formatWallClock(s.expectedStartsAt, timeZone)}
                     </span>
                     {s.shiftedMinutes > 0 ? (
                       <span className="text-attention">
                         {" "}
-                        (<s>{formatBoardTime(s.startsAt, timeZone)}</s>)
+                        (<s>{formatWallClock(s.startsAt, timeZone)}</s>)
                       </span>
                     ) : null}
                     {s.state === "finished" || s.state === "cut-short" ? " ✓" : ""}

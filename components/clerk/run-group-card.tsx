@@ -1,9 +1,9 @@
 "use client";
 import { useDroppable } from "@dnd-kit/core";
 import type { Drive } from "@/lib/paddock/drive";
+import { formatWallClock } from "@/lib/paddock/format-wall-clock";
 import type { RunGroup } from "@/lib/paddock/run-group-plan";
 import { DriveTile } from "./drive-tile";
-import { formatClockTime } from "./format-clock-time";
 import { NotReadyTile } from "./not-ready-tile";
 
 export type GroupSession = { round: number; startsAt: string; endsAt: string };
@@ -90,7 +90,7 @@ export function RunGroupCard({
           {sessions
             .map(
               (s) =>
-                `R${s.round} ${formatClockTime(s.startsAt, timeZone)}–${formatClockTime(s.endsAt, timeZone)}`,
+                `R${s.round} ${formatWallClock(s.startsAt, timeZone)}–${formatWallClock(s.endsAt, timeZone)}`,
             )
             .join(" · ")}
         </p>

@@ -1,6 +1,6 @@
 import type { RunSheetDiff, TimeSpan } from "@/lib/paddock/diff-run-sheets";
+import { formatWallClock } from "@/lib/paddock/format-wall-clock";
 import { CarNumberChip } from "../car-number-chip";
-import { formatClockTime } from "./format-clock-time";
 
 const blockName = { briefing: "Drivers' briefing", lunch: "Lunch break" } as const;
 
@@ -15,7 +15,7 @@ export function RunSheetDiffList({
   firstVersion: boolean;
 }) {
   const span = (s: TimeSpan | null) =>
-    s ? `${formatClockTime(s.startsAt, timeZone)}–${formatClockTime(s.endsAt, timeZone)}` : "none";
+    s ? `${formatWallClock(s.startsAt, timeZone)}–${formatWallClock(s.endsAt, timeZone)}` : "none";
   if (firstVersion) {
     return (
       <p className="text-base" data-testid="run-sheet-diff">

@@ -1,9 +1,9 @@
 "use client";
 import { useState } from "react";
+import { formatWallClock } from "@/lib/paddock/format-wall-clock";
 import type { LiveSession } from "@/lib/paddock/live-session";
 import type { SessionCallState } from "@/lib/paddock/session-call";
 import { sessionCallProblem } from "@/lib/paddock/session-call-problem";
-import { formatClockTime } from "./format-clock-time";
 
 export const sessionStateLabels: Record<LiveSession["state"], string> = {
   planned: "Planned",
@@ -33,7 +33,7 @@ export function SessionCallRow({
 }) {
   const [note, setNote] = useState("");
   const [noteMissing, setNoteMissing] = useState(false);
-  const t = (iso: string) => formatClockTime(iso, timeZone);
+  const t = (iso: string) => formatWallClock(iso, timeZone);
   const noteId = `note-${session.key}`;
   return (
     <li className="card space-y-2" data-testid="session-call" data-session-key={session.key}>

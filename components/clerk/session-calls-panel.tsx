@@ -1,7 +1,7 @@
 "use client";
+import { formatWallClock } from "@/lib/paddock/format-wall-clock";
 import type { LiveSession } from "@/lib/paddock/live-session";
 import type { SessionCallState } from "@/lib/paddock/session-call";
-import { formatClockTime } from "./format-clock-time";
 import { SessionCallRow, sessionStateLabels } from "./session-call-row";
 
 const ended = (s: LiveSession) => s.state === "finished" || s.state === "cut-short";
@@ -35,7 +35,7 @@ export function SessionCallsPanel({
     lastEnded && nowMs - Date.parse(lastEnded.expectedEndsAt) < 15 * 60_000 ? [lastEnded] : [];
   const current = [...recent, ...live.filter((s) => !ended(s)).slice(0, 2)];
   const name = (s: LiveSession) => groupNames[s.groupIndex - 1] ?? `Group ${s.groupIndex}`;
-  const t = (iso: string) => formatClockTime(iso, timeZone);
+  const t = (iso: string) => formatWallClock(iso, timeZone);
   return (
     <section className="space-y-3" aria-labelledby="day-heading" data-testid="session-calls">
       <h2 id="day-heading" className="text-2xl font-bold">

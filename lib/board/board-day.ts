@@ -1,9 +1,9 @@
 import { applySessionCalls } from "../paddock/apply-session-calls";
 import { boardNow } from "../paddock/board-now";
+import { formatWallClock } from "../paddock/format-wall-clock";
 import type { LiveSession } from "../paddock/live-session";
 import type { SessionCall } from "../paddock/session-call";
 import type { BoardGroup, BoardRunSheet } from "./board-schema";
-import { formatBoardTime } from "./format-board-time";
 
 /** A session with its group, as one panel of the board shows it. */
 export type BoardSlot = { session: LiveSession; group: BoardGroup };
@@ -54,7 +54,7 @@ export function boardDay({
     const group = session ? runSheet.groups[session.groupIndex - 1] : undefined;
     return session && group ? { session, group } : null;
   };
-  const time = (iso: string) => formatBoardTime(iso, timeZone);
+  const time = (iso: string) => formatWallClock(iso, timeZone);
   const shifts: BoardShift[] = [];
   let shownDelay = 0;
   for (const s of live) {

@@ -1,19 +1,5 @@
+import { formatWallClock } from "../paddock/format-wall-clock";
 import { describeIssueTime } from "./describe-issue-time";
-
-const timeFormatters = new Map<string, Intl.DateTimeFormat>();
-const clockTime = (instant: Date, timeZone: string) => {
-  let f = timeFormatters.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat("en-GB", {
-      timeZone,
-      hour: "2-digit",
-      minute: "2-digit",
-      hourCycle: "h23",
-    });
-    timeFormatters.set(timeZone, f);
-  }
-  return f.format(instant);
-};
 
 /**
  * Whether tech results are still provisional, in words with their time of issue. Provisional
@@ -48,11 +34,11 @@ export function resultsStanding({
   if (now.getTime() < ends.getTime()) {
     return {
       final: false,
-      words: `Provisional — ${issued}; final at ${clockTime(ends, timeZone)} unless a protest is lodged (${protestWindowMinutes} minutes' protest time)`,
+      words: `Provisional — ${issued}; final at ${formatWallClock(ends.toISOString(), timeZone)} unless a protest is lodged (${protestWindowMinutes} minutes' protest time)`,
     };
   }
   return {
     final: true,
-    words: `Final — ${issued}; the ${protestWindowMinutes} minutes' protest time ended at ${clockTime(ends, timeZone)}`,
+    words: `Final — ${issued}; the ${protestWindowMinutes} minutes' protest time ended at ${formatWallClock(ends.toISOString(), timeZone)}`,
   };
 }

@@ -1,6 +1,6 @@
 import type { ExperienceLevel } from "../paddock/drive";
+import { formatWallClock } from "../paddock/format-wall-clock";
 import type { RunSheetPublication } from "../paddock/run-sheet-schema";
-import { formatLocalTime } from "../results/format-local-time";
 
 /** One drive as printed in its group. */
 export type PrintedDrive = {
@@ -45,7 +45,7 @@ export type RunSheetPrint = {
 export function shapeRunSheetPrint(publication: RunSheetPublication): RunSheetPrint {
   const sheet = publication.body;
   const zone = sheet.timeZone;
-  const time = (iso: string) => formatLocalTime(iso, zone);
+  const time = (iso: string) => formatWallClock(iso, zone);
   const drives = new Map(sheet.drives.map((d) => [d.driveId, d]));
   const groupOf = new Map<string, string>();
   sheet.groups.forEach((g) => {

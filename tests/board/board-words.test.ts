@@ -2,8 +2,8 @@ import { describe, expect, it } from "vitest";
 import { isBoardPath } from "../../components/is-board-path";
 import { boardEtag, etagMatches } from "../../lib/board/board-etag";
 import type { Board } from "../../lib/board/board-schema";
-import { formatBoardSpan, formatBoardTime } from "../../lib/board/format-board-time";
 import { lastHeardWords } from "../../lib/board/last-heard-words";
+import { formatWallClock, formatWallClockSpan } from "../../lib/paddock/format-wall-clock";
 
 describe("lastHeardWords", () => {
   it("says how old the board is in whole minutes, then hours", () => {
@@ -17,19 +17,19 @@ describe("lastHeardWords", () => {
   });
 });
 
-describe("formatBoardTime", () => {
+describe("formatWallClock", () => {
   it("prints the venue's wall-clock time on either side of a clock change", () => {
     // Source: IANA tz database (europe), Europe/London: GMT until 01:00 UTC on the last Sunday
     // in March (28 March 2027), BST (UTC+1) after; back at 01:00 UTC on 31 October 2027.
-    expect(formatBoardTime("2027-03-28T00:30:00Z", "Europe/London")).toBe("00:30");
-    expect(formatBoardTime("2027-03-28T01:30:00Z", "Europe/London")).toBe("02:30");
-    expect(formatBoardTime("2027-10-31T00:30:00Z", "Europe/London")).toBe("01:30");
-    expect(formatBoardTime("2027-10-31T01:30:00Z", "Europe/London")).toBe("01:30");
+    expect(formatWallClock("2027-03-28T00:30:00Z", "Europe/London")).toBe("00:30");
+    expect(formatWallClock("2027-03-28T01:30:00Z", "Europe/London")).toBe("02:30");
+    expect(formatWallClock("2027-10-31T00:30:00Z", "Europe/London")).toBe("01:30");
+    expect(formatWallClock("2027-10-31T01:30:00Z", "Europe/London")).toBe("01:30");
     // Source: IANA tz database (australasia), Australia/Adelaide is UTC+9:30 in winter (ACST).
     expect(
-      formatBoardSpan("2027-06-05T00:00:00Z", "2027-06-05T00:20:00Z", "Australia/Adelaide"),
+      formatWallClockSpan("2027-06-05T00:00:00Z", "2027-06-05T00:20:00Z", "Australia/Adelaide"),
     ).toBe("09:30–09:50");
-    expect(formatBoardTime("not a time", "Europe/London")).toBe("--:--");
+    expect(formatWallClock("not a time", "Europe/London")).toBe("--:--");
   });
 });
 
