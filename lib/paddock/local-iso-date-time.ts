@@ -1,4 +1,4 @@
-import { zoneOffsetMinutes } from "./zone-offset-minutes";
+import { zoneOffsetMinutes } from "../scrutineer/calendar/zone-offset-minutes";
 
 const pad = (n: number, width = 2) => String(n).padStart(width, "0");
 

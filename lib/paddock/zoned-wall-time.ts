@@ -1,5 +1,5 @@
 import { isoDateParts } from "../scrutineer/calendar/iso-date-parts";
-import { zoneOffsetMinutes } from "./zone-offset-minutes";
+import { zoneOffsetMinutes } from "../scrutineer/calendar/zone-offset-minutes";
 
 /**
  * How a wall-clock time met the zone's clock on that date:

@@ -1,4 +1,5 @@
 import { isoDateParts } from "../scrutineer/calendar/iso-date-parts";
+import { zoneOffsetMinutes } from "../scrutineer/calendar/zone-offset-minutes";
 
 /** How long a pass stays good after the event's local date has ended, in seconds: covers a
  *  late finish and a phone clock that runs a little fast. */
@@ -6,42 +7,9 @@ export const defaultPassExpiryMarginSeconds = 2 * 3600;
 
 const hourMs = 3_600_000;
 
-// Intl.DateTimeFormat is slow to build; one per zone is plenty.
-const formatters = new Map<string, Intl.DateTimeFormat>();
-
-function formatterFor(timeZone: string): Intl.DateTimeFormat {
-  let f = formatters.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat("en-US", {
-      timeZone,
-      hourCycle: "h23",
-      year: "numeric",
-      month: "numeric",
-      day: "numeric",
-      hour: "numeric",
-      minute: "numeric",
-      second: "numeric",
-    });
-    formatters.set(timeZone, f);
-  }
-  return f;
-}
-
 /** The zone's offset from UTC at an instant, in milliseconds (local wall time − UTC). */
-function zoneOffsetMs(epochMs: number, timeZone: string): number {
-  const parts = formatterFor(timeZone).formatToParts(new Date(epochMs));
-  const get = (type: Intl.DateTimeFormatPartTypes) =>
-    Number(parts.find((p) => p.type === type)?.value ?? Number.NaN);
-  const wallAsUtc = Date.UTC(
-    get("year"),
-    get("month") - 1,
-    get("day"),
-    get("hour"),
-    get("minute"),
-    get("second"),
-  );
-  return wallAsUtc - Math.floor(epochMs / 1000) * 1000;
-}
+const zoneOffsetMs = (epochMs: number, timeZone: string) =>
+  zoneOffsetMinutes(epochMs, timeZone) * 60_000;
 
 /**
  * The instant the local calendar date `localDate` ends in `timeZone` — the first moment of the

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { localIsoDateTime } from "@/lib/paddock/local-iso-date-time";
-import { zoneOffsetMinutes } from "@/lib/paddock/zone-offset-minutes";
 import { zonedWallTime } from "@/lib/paddock/zoned-wall-time";
+import { zoneOffsetMinutes } from "@/lib/scrutineer/calendar/zone-offset-minutes";
 
 // Every expected instant below is worked out by hand from the IANA tz database's rule lines
 // (tzdata files `europe`, `northamerica`, `australasia`), not from the code under test.
