@@ -11,6 +11,7 @@ import {
   date,
   datetime,
   decimal,
+  double,
   index,
   int,
   json,
@@ -65,6 +66,16 @@ export const users = mysqlTable("users", {
   image: varchar("image", { length: 255 }),
   passwordHash: varchar("password_hash", { length: 100 }),
   createdAt: datetime("created_at", { mode: "date", fsp: 3 }).$defaultFn(() => new Date()),
+  // ── The entrant's profile (issue 11); `name` above is their full name as they give it. ──
+  /** Calendar date of birth; a driver under 18 on an event's date is a minor there. */
+  dateOfBirth: date("date_of_birth", { mode: "string" }),
+  phone: varchar("phone", { length: 40 }),
+  emergencyContactName: varchar("emergency_contact_name", { length: 160 }),
+  emergencyContactPhone: varchar("emergency_contact_phone", { length: 40 }),
+  /** Competition licence (grade and number, as the licence shows them), if any. */
+  licence: varchar("licence", { length: 80 }),
+  experienceLevel: mysqlEnum("experience_level", experienceLevels),
+  profileUpdatedAt: datetime("profile_updated_at", { mode: "date", fsp: 3 }),
 });
 
 export const accounts = mysqlTable(
@@ -181,6 +192,14 @@ export const events = mysqlTable("events", {
   entryFeeMinor: int("entry_fee_minor").notNull(),
   currency: char("currency", { length: 3 }).notNull(),
   capacity: smallint("capacity").notNull(),
+  /** When entries open and close (instants); null = open while the status says entries-open. */
+  entriesOpenAt: datetime("entries_open_at", { mode: "date", fsp: 3 }),
+  entriesCloseAt: datetime("entries_close_at", { mode: "date", fsp: 3 }),
+  /** The waiver every driver accepts, and the version its acceptances record. */
+  waiverText: text("waiver_text"),
+  waiverVersion: varchar("waiver_version", { length: 40 }),
+  /** What a withdrawal gets back (lib/entries/refund-policy-schema.ts); null = no refunds. */
+  refundPolicy: json("refund_policy"),
   /** Minutes after provisional results are issued during which a protest may be lodged. */
   protestWindowMinutes: smallint("protest_window_minutes").notNull().default(30),
   createdAt: createdAt(),
@@ -234,10 +253,64 @@ export const cars = mysqlTable(
     year: smallint("year").notNull(),
     colour: varchar("colour", { length: 40 }).notNull(),
     notes: varchar("notes", { length: 500 }),
+    /** The entrant's own figures, in millimetres whatever unit they were typed in. */
+    bodyWidthMm: double("body_width_mm"),
+    roofHeightMm: double("roof_height_mm"),
+    /** A retired car stays for its past entries but is no longer offered. */
+    retiredAt: datetime("retired_at", { mode: "date", fsp: 3 }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
   (t) => [index("cars_owner_idx").on(t.ownerId)],
+);
+
+export const carFileKinds = ["front", "side", "rear", "dyno-sheet"] as const;
+/** Photos of a car and its dyno sheet, in object storage; a replaced file gets `removedAt`. */
+export const carFiles = mysqlTable(
+  "car_files",
+  {
+    id: uuid("id").primaryKey(),
+    carId: uuid("car_id")
+      .notNull()
+      .references(() => cars.id),
+    kind: mysqlEnum("kind", carFileKinds).notNull(),
+    bucket: key("bucket", 63).notNull(),
+    objectKey: key("object_key", 300).notNull(),
+    contentType: varchar("content_type", { length: 100 }).notNull(),
+    byteSize: int("byte_size").notNull(),
+    widthPx: smallint("width_px"),
+    heightPx: smallint("height_px"),
+    sha256: binaryCollation(char("sha256", { length: 64 })).notNull(),
+    uploadedBy: userId("uploaded_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    removedAt: datetime("removed_at", { mode: "date", fsp: 3 }),
+  },
+  (t) => [
+    index("car_files_car_idx").on(t.carId),
+    uniqueIndex("car_files_object_unique").on(t.bucket, t.objectKey),
+  ],
+);
+
+/** A wing planned before it is built (the aero pre-check), saved against one of the owner's cars. */
+export const aeroPlans = mysqlTable(
+  "aero_plans",
+  {
+    id: uuid("id").primaryKey(),
+    ownerId: userId("owner_id")
+      .notNull()
+      .references(() => users.id),
+    carId: uuid("car_id")
+      .notNull()
+      .references(() => cars.id),
+    name: varchar("name", { length: 80 }).notNull(),
+    /** The plan as lib/scrutineer/aero/wing-plan-schema.ts shapes it. */
+    plan: json("plan").notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("aero_plans_car_idx").on(t.carId), index("aero_plans_owner_idx").on(t.ownerId)],
 );
 
 export const entries = mysqlTable(
@@ -263,7 +336,12 @@ export const entries = mysqlTable(
     coDriverLapTimeEstimateMs: int("co_driver_lap_time_estimate_ms"),
     /** Entrant declarations (dyno sheet, tyres, modification points), shaped by lib/scrutineer. */
     declarations: json("declarations").notNull(),
-    status: mysqlEnum("status", ["entered", "withdrawn"]).notNull().default("entered"),
+    /** "waiting": on the waiting list (not in the field); moves up to "entered" in `waitingSeq`
+     *  order when a place frees. */
+    status: mysqlEnum("status", ["entered", "waiting", "withdrawn"]).notNull().default("entered"),
+    /** Place in the waiting list, given under the event's row lock (lower moves up first). */
+    waitingSeq: int("waiting_seq"),
+    withdrawnAt: datetime("withdrawn_at", { mode: "date", fsp: 3 }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -273,6 +351,32 @@ export const entries = mysqlTable(
     index("entries_driver_idx").on(t.driverId),
     index("entries_co_driver_idx").on(t.coDriverId),
   ],
+);
+
+/** A co-driver asked by e-mail to share an entry's car; they accept from their own account. Only
+ *  the SHA-256 of the link's token is kept. */
+export const coDriverInvites = mysqlTable(
+  "co_driver_invites",
+  {
+    id: uuid("id").primaryKey(),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id),
+    email: key("email", 255).notNull(),
+    tokenHash: binaryCollation(char("token_hash", { length: 64 }))
+      .notNull()
+      .unique("co_driver_invites_token_unique"),
+    invitedBy: userId("invited_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    expiresAt: datetime("expires_at", { mode: "date", fsp: 3 }).notNull(),
+    acceptedAt: datetime("accepted_at", { mode: "date", fsp: 3 }),
+    acceptedBy: userId("accepted_by").references(() => users.id),
+    /** Declined by the invitee, or cancelled by the entrant (a new invitation cancels the old). */
+    closedAt: datetime("closed_at", { mode: "date", fsp: 3 }),
+  },
+  (t) => [index("co_driver_invites_entry_idx").on(t.entryId)],
 );
 
 export const passes = mysqlTable(
@@ -456,7 +560,12 @@ export const payments = mysqlTable(
     providerRef: key("provider_ref", 120).notNull(),
     amountMinor: int("amount_minor").notNull(),
     currency: char("currency", { length: 3 }).notNull(),
-    status: mysqlEnum("status", ["pending", "paid", "failed", "refunded"]).notNull(),
+    status: mysqlEnum("status", ["pending", "paid", "failed", "cancelled", "refunded"]).notNull(),
+    /** The provider's payment (intent) id once paid: refunds name it. */
+    paymentRef: key("payment_ref", 120),
+    paidAt: datetime("paid_at", { mode: "date", fsp: 3 }),
+    /** Refunded so far, in the payment's minor units. */
+    refundedMinor: int("refunded_minor").notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -485,6 +594,15 @@ export const waivers = mysqlTable(
     guardianName: varchar("guardian_name", { length: 160 }),
     guardianSignedAt: datetime("guardian_signed_at", { mode: "date", fsp: 3 }),
     textVersion: varchar("text_version", { length: 40 }).notNull(),
+    /** The address the acceptance came from (lib/auth/client-address.ts). */
+    signerIp: varchar("signer_ip", { length: 45 }),
+    /** A minor's parent or guardian, asked by e-mail; only the SHA-256 of the link's token is kept. */
+    guardianEmail: key("guardian_email", 255),
+    guardianTokenHash: binaryCollation(char("guardian_token_hash", { length: 64 })).unique(
+      "waivers_guardian_token_unique",
+    ),
+    guardianRequestedAt: datetime("guardian_requested_at", { mode: "date", fsp: 3 }),
+    guardianIp: varchar("guardian_ip", { length: 45 }),
   },
   (t) => [index("waivers_event_entry_idx").on(t.eventId, t.entryId)],
 );
@@ -514,6 +632,15 @@ export const uploads = mysqlTable(
     uniqueIndex("uploads_object_unique").on(t.bucket, t.objectKey),
   ],
 );
+
+/** Each webhook event the payments provider delivered, by its id: a redelivery finds its row and
+ *  changes nothing. */
+export const paymentWebhookEvents = mysqlTable("payment_webhook_events", {
+  providerEventId: key("provider_event_id", 120).primaryKey(),
+  provider: key("provider", 30).notNull(),
+  type: varchar("type", { length: 80 }).notNull(),
+  receivedAt: datetime("received_at", { mode: "date", fsp: 3 }).notNull(),
+});
 
 // ── Logs ───────────────────────────────────────────────────────────────────────────────────
 export const mailLog = mysqlTable(

@@ -2,6 +2,7 @@
 // four classes, an official for every role, and entrants — one car shared by two drivers.
 import { v7 as uuidv7 } from "uuid";
 import { normalizeEmail } from "../../lib/auth/normalize-email";
+import type { RefundPolicy } from "../../lib/entries/refund-policy-schema";
 import { modeNow } from "../../lib/env";
 import type { EntryDeclarationsInput } from "../../lib/scrutineer/classes/entry-declarations-schema";
 import { entryDeclarationsSchema } from "../../lib/scrutineer/classes/entry-declarations-schema";
@@ -36,6 +37,7 @@ import {
 } from "./demo-people";
 import { demoRuleSet } from "./demo-rule-set";
 import { type DemoTwist, demoTechRecords } from "./demo-tech-records";
+import { demoWaiverText, demoWaiverVersion } from "./demo-waiver";
 import { createPrng } from "./prng";
 
 /** Classes of the demo ladder and how many entries each gets (40 in all). */
@@ -79,6 +81,10 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
   const pace = createPrng(20270418);
   const now = new Date();
   const eventDate = nextSaturday(opts.today);
+  /** The open event: four weeks after the running one. */
+  const openEventDate = new Date(Date.parse(`${eventDate}T12:00:00Z`) + 28 * 86_400_000)
+    .toISOString()
+    .slice(0, 10);
   const clubId = uuidv7();
   const venueId = uuidv7();
   const ruleSetId = uuidv7();
@@ -211,6 +217,32 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
       entryFeeMinor: 9500,
       currency: "GBP",
       capacity: 48,
+      waiverText: demoWaiverText,
+      waiverVersion: demoWaiverVersion,
+      refundPolicy: demoRefundPolicy,
+      createdAt: now,
+      updatedAt: now,
+    });
+    // A second event a month on, open for entries: where a new entrant enters.
+    await tx.insert(events).values({
+      id: uuidv7(),
+      clubId,
+      venueId,
+      name: "Cinder Vale Winter Sprint",
+      slug: `cinder-vale-winter-${openEventDate}`,
+      eventDate: openEventDate,
+      timeZone: "Europe/London",
+      unitSystem: "mm",
+      status: "entries-open",
+      ruleSetVersionId,
+      entryFeeMinor: 8500,
+      currency: "GBP",
+      capacity: 30,
+      entriesOpenAt: new Date(Date.parse(`${opts.today}T00:00:00Z`) - 7 * 86_400_000),
+      entriesCloseAt: new Date(`${openEventDate}T00:00:00Z`),
+      waiverText: demoWaiverText,
+      waiverVersion: demoWaiverVersion,
+      refundPolicy: demoRefundPolicy,
       createdAt: now,
       updatedAt: now,
     });
@@ -232,6 +264,14 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
 
   return { eventId, entryIds: entryRows.map((e) => e.id as string), userIds };
 }
+
+/** The demo club's refund policy: in full up to two weeks before, half up to three days before. */
+const demoRefundPolicy: RefundPolicy = {
+  tiers: [
+    { daysBefore: 14, percent: 100 },
+    { daysBefore: 3, percent: 50 },
+  ],
+};
 
 /** Drivers' experience in the demo: more novices and intermediates than experts, as at a club day. */
 const demoExperience = [

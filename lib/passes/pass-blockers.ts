@@ -1,6 +1,6 @@
 /** What decides whether an entry may have a pass yet. */
 export type PassReadiness = {
-  entryStatus: "entered" | "withdrawn";
+  entryStatus: "entered" | "waiting" | "withdrawn";
   /** As the sign-on desk sees it: signed (and co-signed by a guardian for a minor), signed but
    *  waiting for the guardian, or not signed. */
   waiver: "signed" | "needs-guardian" | "missing";
@@ -15,6 +15,9 @@ export type PassReadiness = {
  */
 export function passBlockers(r: PassReadiness): string[] {
   if (r.entryStatus === "withdrawn") return ["This entry was withdrawn, so it has no pass."];
+  if (r.entryStatus === "waiting") {
+    return ["This entry is on the waiting list: it gets a pass once a place is yours."];
+  }
   if (r.eventOver) return ["This event is over, so passes are no longer issued."];
   const blockers: string[] = [];
   if (r.waiver === "missing") blockers.push("Sign the waiver for this entry.");
