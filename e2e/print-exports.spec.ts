@@ -45,7 +45,7 @@ async function eventFacts() {
   }>(
     databaseUrl(),
     `select e.id, e.time_zone, e.event_date, v.body from events e
-       join rule_set_versions v on v.id = e.rule_set_version_id order by e.created_at limit 1`,
+       join rule_set_versions v on v.id = e.rule_set_version_id order by e.event_date limit 1`,
   );
   if (!event) throw new Error("no event");
   const body = (typeof event.body === "string" ? JSON.parse(event.body) : event.body) as {

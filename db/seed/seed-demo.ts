@@ -223,9 +223,11 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
       createdAt: now,
       updatedAt: now,
     });
-    // A second event a month on, open for entries: where a new entrant enters.
+    // A second event a month on, open for entries: where a new entrant enters. The club's
+    // officials run it too.
+    const openEventId = uuidv7();
     await tx.insert(events).values({
-      id: uuidv7(),
+      id: openEventId,
       clubId,
       venueId,
       name: "Cinder Vale Winter Sprint",
@@ -247,12 +249,14 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
       updatedAt: now,
     });
     await tx.insert(eventOfficials).values(
-      demoOfficials.map((o) => ({
-        eventId,
-        userId: userIds[o.key] ?? "",
-        role: o.role,
-        createdAt: now,
-      })),
+      [eventId, openEventId].flatMap((officialEventId) =>
+        demoOfficials.map((o) => ({
+          eventId: officialEventId,
+          userId: userIds[o.key] ?? "",
+          role: o.role,
+          createdAt: now,
+        })),
+      ),
     );
     await tx.insert(cars).values(carRows);
     await tx.insert(entries).values(entryRows);

@@ -19,7 +19,7 @@ export async function publishBoardRunSheet() {
   const url = e2eDatabaseUrl();
   const [event] = await queryTestDb<{ id: string; time_zone: string; event_date: string }>(
     url,
-    "select id, time_zone, date_format(event_date, '%Y-%m-%d') as event_date from events limit 1",
+    "select id, time_zone, date_format(event_date, '%Y-%m-%d') as event_date from events order by event_date limit 1",
   );
   if (!event) throw new Error("no event in the browser tests' database");
   const now = Date.now();

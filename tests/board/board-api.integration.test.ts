@@ -27,7 +27,7 @@ const getBoard = (headers: Record<string, string> = {}) =>
 beforeAll(async () => {
   const [event] = await queryTestDb<{ id: string; time_zone: string; event_date: string }>(
     databaseUrl,
-    "select id, time_zone, date_format(event_date, '%Y-%m-%d') as event_date from events limit 1",
+    "select id, time_zone, date_format(event_date, '%Y-%m-%d') as event_date from events order by event_date limit 1",
   );
   eventId = event?.id ?? "";
   timeZone = event?.time_zone ?? "";

@@ -196,7 +196,7 @@ async function queueOnPhone(records: TechRecord[]) {
 beforeAll(async () => {
   stack = await startFaultStack();
   await Promise.all([stack.startApp(), stack.startWorker()]);
-  const [event] = await db<{ id: string }>("select id from events limit 1");
+  const [event] = await db<{ id: string }>("select id from events order by event_date limit 1");
   eventId = event?.id ?? "";
   const user = async (email: string) =>
     (await db<{ id: string }>("select id from users where email = ?", [email]))[0]?.id ?? "";

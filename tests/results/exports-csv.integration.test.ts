@@ -75,7 +75,7 @@ beforeAll(async () => {
   const [event] = await queryTestDb<{ id: string; time_zone: string; body: unknown }>(
     databaseUrl,
     `select e.id, e.time_zone, v.body from events e
-       join rule_set_versions v on v.id = e.rule_set_version_id order by e.created_at limit 1`,
+       join rule_set_versions v on v.id = e.rule_set_version_id order by e.event_date limit 1`,
   );
   if (!event) throw new Error("no event");
   eventId = event.id;

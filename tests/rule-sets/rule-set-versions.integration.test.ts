@@ -33,7 +33,7 @@ beforeAll(async () => {
   const [event] = await queryTestDb<{ id: string; rule_set_version_id: string; body: string }>(
     databaseUrl,
     `select e.id, e.rule_set_version_id, v.body from events e
-     join rule_set_versions v on v.id = e.rule_set_version_id limit 1`,
+     join rule_set_versions v on v.id = e.rule_set_version_id order by e.event_date limit 1`,
   );
   eventId = event?.id ?? "";
   v1Id = event?.rule_set_version_id ?? "";
