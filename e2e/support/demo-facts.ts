@@ -43,7 +43,7 @@ export async function movedUpEntrant() {
       where e.co_driver_id is null
         and exists (select 1 from payments p where p.entry_id = e.id and p.status = 'paid')
         and exists (select 1 from waivers w where w.entry_id = e.id and w.is_minor = 0)
-      order by e.car_number order by e.event_date limit 1`,
+      order by e.car_number limit 1`,
   );
   if (!row) throw new Error("the demo has no signed-on moved-up entry");
   const classes = await eventClasses();
@@ -58,7 +58,7 @@ export async function clearedMinorWithoutGuardian(): Promise<number> {
     `select e.car_number from entries e
        join verdicts v on v.entry_id = e.id and v.status in ('cleared', 'moved-up')
        join waivers w on w.entry_id = e.id and w.is_minor = 1 and w.guardian_signed_at is null
-      order by e.car_number order by e.event_date limit 1`,
+      order by e.car_number limit 1`,
   );
   if (!row) throw new Error("the demo has no cleared minor without a guardian's signature");
   return row.car_number;

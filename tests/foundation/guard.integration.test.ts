@@ -8,7 +8,10 @@ const databaseUrl = inject("databaseUrl");
 let eventId = "";
 
 beforeAll(async () => {
-  const [row] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events order by event_date limit 1");
+  const [row] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from events order by event_date limit 1",
+  );
   eventId = row?.id ?? "";
   expect(eventId).not.toBe("");
 });

@@ -94,7 +94,10 @@ describe("one person, one exact e-mail address", () => {
       const row = rows.find((r) => r.t === table && r.c === column);
       expect(row?.collation, `${table}.${column}`).toBe("utf8mb4_bin");
     }
-    const [event] = await queryTestDb<{ slug: string }>(databaseUrl, "select slug from events order by event_date limit 1");
+    const [event] = await queryTestDb<{ slug: string }>(
+      databaseUrl,
+      "select slug from events order by event_date limit 1",
+    );
     const found = await queryTestDb(databaseUrl, "select id from events where slug = ?", [
       (event?.slug ?? "").toUpperCase(),
     ]);

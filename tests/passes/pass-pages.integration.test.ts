@@ -40,7 +40,10 @@ let own: Row;
 let closeDb: (() => Promise<void>) | undefined;
 
 beforeAll(async () => {
-  const [event] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events order by event_date limit 1");
+  const [event] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from events order by event_date limit 1",
+  );
   eventId = event?.id ?? "";
   own = await entryWhere("u.email = ?", [demo.entrant]);
   // The query functions read DATABASE_URL when first imported; point them at this run's database.

@@ -10,7 +10,10 @@ let eventId = "";
 let entries = 0;
 
 beforeAll(async () => {
-  const [event] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events order by event_date limit 1");
+  const [event] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from events order by event_date limit 1",
+  );
   eventId = event?.id ?? "";
   const [count] = await queryTestDb<{ n: number }>(
     databaseUrl,

@@ -3,7 +3,10 @@ import { queryTestDb } from "./query-test-db";
 
 /** The demo event's id, an entry by car number, and an official's user id, from the test database. */
 export async function techFixtures(databaseUrl: string) {
-  const [event] = await queryTestDb<{ id: string }>(databaseUrl, "select id from events order by event_date limit 1");
+  const [event] = await queryTestDb<{ id: string }>(
+    databaseUrl,
+    "select id from events order by event_date limit 1",
+  );
   if (!event) throw new Error("no event in the test database");
   const entryByNumber = async (carNumber: number) => {
     const [row] = await queryTestDb<{ id: string }>(
