@@ -22,27 +22,35 @@ export function SiteHeader({
           Plumbline
         </Link>
         <HideOnBoard>
-          {userName && signOutAction ? (
-            <form action={signOutAction} className="flex min-w-0 items-center gap-3">
-              <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
-                <span className="sm:hidden">{shortPersonName(userName)}</span>
-                <span className="hidden sm:inline">{userName}</span>
-              </span>
-              <button
-                type="submit"
-                className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
-              >
-                Sign out
-              </button>
-            </form>
-          ) : (
+          <div className="flex min-w-0 items-center gap-2">
             <Link
-              href="/sign-in"
-              className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+              href="/events"
+              className="flex min-h-touch items-center px-2 text-lg font-semibold underline-offset-4 hover:underline"
             >
-              Sign in
+              Events
             </Link>
-          )}
+            {userName && signOutAction ? (
+              <form action={signOutAction} className="flex min-w-0 items-center gap-3">
+                <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+                  <span className="sm:hidden">{shortPersonName(userName)}</span>
+                  <span className="hidden sm:inline">{userName}</span>
+                </span>
+                <button
+                  type="submit"
+                  className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+                >
+                  Sign out
+                </button>
+              </form>
+            ) : (
+              <Link
+                href="/sign-in"
+                className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+              >
+                Sign in
+              </Link>
+            )}
+          </div>
         </HideOnBoard>
       </SiteHeaderRow>
     </header>

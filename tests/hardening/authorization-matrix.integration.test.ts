@@ -258,6 +258,53 @@ const actions: Record<string, Row> = {
       { status: "idle" },
     ),
   },
+  // ── events & entering (issue 11) ─────────────────────────────────────────────────────────
+  "app/events/[slug]/enter/actions.ts#enterEventAction": {
+    // Any signed-in person may enter their own car; the page is not behind proxy.ts's redirect,
+    // so signed out gets "Sign in first." An empty form is refused after the guard.
+    expect: signedIn(200),
+    call: action(
+      "app/events/[slug]/enter/actions.ts#enterEventAction",
+      () => "/events/no-such-event/enter",
+      () => ({ eventSlug: "no-such-event", carId: "", classId: "", lapTime: "", experience: "" }),
+      { status: "idle" },
+    ),
+  },
+  "app/(entrant)/entries/[entryId]/actions.ts#inviteCoDriverAction": {
+    // Only the entry's driver may invite: car 7 has its co-driver already, so the driver gets
+    // that refusal (past the ownership check, 200) and everyone else the ownership one (403).
+    expect: signedInPage(only(200, "owner")),
+    call: async (s, c) => {
+      const answer = await callServerAction(s, {
+        action: "app/(entrant)/entries/[entryId]/actions.ts#inviteCoDriverAction",
+        page: `/entries/${c.entryId}`,
+        fields: { entryId: c.entryId, coDriverEmail: "someone@matrix.test" },
+        state: { status: "idle" },
+      });
+      if (answer.text.includes("Only the entry's driver")) return 403;
+      return actionOutcome(answer);
+    },
+  },
+  "app/invites/[token]/actions.ts#acceptInviteAction": {
+    // Whoever is signed in may answer an invitation (the link is the key); an unknown one is refused.
+    expect: signedIn(200),
+    call: action(
+      "app/invites/[token]/actions.ts#acceptInviteAction",
+      () => "/invites/unknown-token-of-the-matrix-test",
+      () => ({ token: "unknown-token-of-the-matrix-test", lapTime: "1:55", experience: "novice" }),
+      { status: "idle" },
+    ),
+  },
+  "app/invites/[token]/actions.ts#declineInviteAction": {
+    expect: signedIn(200),
+    call: action(
+      "app/invites/[token]/actions.ts#declineInviteAction",
+      () => "/invites/unknown-token-of-the-matrix-test",
+      () => ({ token: "unknown-token-of-the-matrix-test" }),
+      { status: "idle" },
+    ),
+  },
+  // ── end of events & entering ─────────────────────────────────────────────────────────────
   "app/(auth)/sign-in/actions.ts#signInWithPassword": {
     // Public: anyone may try; a wrong password is answered on the form.
     expect: all(200),

@@ -3,10 +3,17 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { forbidden, notFound } from "next/navigation";
 import { Caution } from "@/components/caution";
+import { CoDriverInviteForm } from "@/components/co-driver-invite-form";
+import { EntryChecklist } from "@/components/entry-checklist";
 import { EntryResultView } from "@/components/entry-result-view";
 import { EntryRunGroup } from "@/components/entry-run-group";
+import { getEntryChecklist } from "@/db/queries/entering/get-entry-checklist";
 import { getLatestRunSheet } from "@/db/queries/run-sheets/get-latest-run-sheet";
 import { requirePageUser } from "@/lib/auth/require-page-permission";
+import { clock } from "@/lib/clock";
+import { entryChecklistSteps } from "@/lib/entries/entry-checklist-steps";
+import { experienceLabels } from "@/lib/entries/experience-labels";
+import { formatLapTime } from "@/lib/entries/format-lap-time";
 import { loadEntryResult } from "@/lib/entries/load-entry-result";
 import { AppError } from "@/lib/errors";
 import { idSchema } from "@/lib/http/id-schema";
@@ -17,11 +24,19 @@ import { entrySessions } from "@/lib/run-sheet/entry-sessions";
 import { formatEventDate } from "@/lib/run-sheet/format-event-date";
 import { formatPublishedAt } from "@/lib/run-sheet/format-published-at";
 import { formatSessionSpan } from "@/lib/run-sheet/format-session-span";
+import { inviteCoDriverAction } from "./actions";
 
 export const metadata: Metadata = { title: "Your entry" };
 
-export default async function EntryPage({ params }: { params: Promise<{ entryId: string }> }) {
+export default async function EntryPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ entryId: string }>;
+  searchParams: Promise<{ entered?: string }>;
+}) {
   const { entryId } = await params;
+  const { entered } = await searchParams;
   const user = await requirePageUser(`/entries/${entryId}`);
   if (!idSchema.safeParse(entryId).success) notFound();
   const result = await loadEntryResult({ entryId, user }).catch((error: unknown) => {
@@ -29,7 +44,24 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
-  const sheet = await getLatestRunSheet({ eventId: result.eventId });
+  const now = clock.now();
+  const [sheet, checklist] = await Promise.all([
+    getLatestRunSheet({ eventId: result.eventId }),
+    getEntryChecklist({ entryId, now }),
+  ]);
+  if (!checklist) notFound();
+  const isDriver = checklist.drivers[0]?.userId === user.id;
+  const steps = entryChecklistSteps({
+    entryId,
+    status: checklist.status,
+    declared: checklist.declared,
+    drivers: checklist.drivers,
+    payment: checklist.payment,
+    invite: checklist.invite,
+    hasCoDriver: checklist.drivers.length > 1,
+    hasPass: checklist.hasPass,
+    now,
+  });
   const queryClient = getQueryClient();
   queryClient.setQueryData(entryKeys.result(entryId), result);
   return (
@@ -46,6 +78,48 @@ export default async function EntryPage({ params }: { params: Promise<{ entryId:
           </p>
         </div>
       </div>
+      {entered ? (
+        <p className="card font-semibold" role="status" data-testid="entry-received">
+          Entry received. We have e-mailed you what comes next.
+        </p>
+      ) : null}
+      <p className="card text-lg font-semibold" data-testid="entry-status">
+        {checklist.status === "entered"
+          ? "In the field."
+          : checklist.status === "waiting"
+            ? `On the waiting list: place ${checklist.waitingPlace}. You move up in order when someone withdraws.`
+            : "Withdrawn."}
+      </p>
+      <ul className="card space-y-1" data-testid="entry-drivers">
+        {checklist.drivers.map((d) => (
+          <li key={d.userId}>
+            <span className="font-semibold">{d.role === "driver" ? "Driver" : "Co-driver"}:</span>{" "}
+            {d.name}
+            {d.lapTimeEstimateMs ? ` · estimate ${formatLapTime(d.lapTimeEstimateMs)}` : ""}
+            {d.experience ? ` · ${experienceLabels[d.experience].split(" — ")[0]}` : ""}
+          </li>
+        ))}
+      </ul>
+      {checklist.status === "withdrawn" ? null : (
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Your steps</h2>
+          <EntryChecklist
+            steps={steps}
+            coDriverSlot={
+              isDriver && checklist.drivers.length === 1 ? (
+                <CoDriverInviteForm
+                  entryId={entryId}
+                  again={checklist.invite !== null}
+                  action={inviteCoDriverAction}
+                />
+              ) : null
+            }
+          />
+          <Link href={`/entries/${entryId}/withdraw`} className="btn-secondary">
+            Withdraw this entry
+          </Link>
+        </section>
+      )}
       <HydrationBoundary state={dehydrate(queryClient)}>
         <EntryResultView entryId={entryId} />
       </HydrationBoundary>
