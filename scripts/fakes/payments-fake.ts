@@ -104,6 +104,11 @@ export async function startPaymentsFake(opts: {
     m = p.match(/^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/);
     if (method === "POST" && m) return expireSession(m[1] as string);
     if (method === "POST" && p === "/v1/refunds") return createRefund(form);
+    if (method === "GET" && p === "/v1/refunds") {
+      const pi = url.searchParams.get("payment_intent");
+      const data = Object.values(state.refunds).filter((r) => !pi || r.payment_intent === pi);
+      return [200, { object: "list", data, has_more: false, url: "/v1/refunds" }];
+    }
     m = p.match(/^\/v1\/events\/([\w-]+)$/);
     if (method === "GET" && m) return found(state.events[m[1] as string], "event");
     return [404, apiError(`Unrecognized request URL (${method}: ${p}).`)];
