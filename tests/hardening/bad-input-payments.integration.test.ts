@@ -67,12 +67,12 @@ describe("the pay and withdraw actions", () => {
     for (const action of [PAY_ACTION, WITHDRAW_ACTION]) {
       const answer = await callServerAction(entrant, {
         action,
-        page: "/entries/00000000-0000-4000-8000-000000000000/pay",
+        page: `/entries/00000000-0000-4000-8000-000000000000/${action === PAY_ACTION ? "pay" : "withdraw"}`,
         fields: { entryId: "00000000-0000-4000-8000-000000000000", confirm: "yes" },
         state: { status: "idle" },
       });
       await expectRefusal(answer);
-      expect(answer.text).toContain("No such entry.");
+      expect(answer.text, action).toContain("No such entry.");
     }
   });
 });
@@ -89,7 +89,8 @@ describe("the payments webhook", () => {
           headers,
           body,
         });
-        expect([400, 413]).toContain(res.status);
+        // 431: a header over Node's 16 KB limit is refused by the HTTP server before the app.
+        expect([400, 413, 431]).toContain(res.status);
         await res.arrayBuffer();
       }),
       { numRuns: RUNS },
