@@ -9,6 +9,9 @@ import { z } from "zod";
  * 127.0.0.1. `next build` needs no environment at all.
  */
 export const DEMO_AUTH_SECRET = "plumbline-demo-secret-not-for-production-use-000000";
+/** The demo's payments keys: they only open the local payments fake (scripts/fakes/payments-fake.ts). */
+export const DEMO_STRIPE_SECRET_KEY = "sk_test_plumblineDemoKeyForTheLocalFakeOnly";
+export const DEMO_STRIPE_WEBHOOK_SECRET = "whsec_plumblineDemoWebhookSecretForTheLocalFake";
 
 const port = z.coerce.number().int().min(1).max(65535);
 
@@ -42,6 +45,13 @@ const envSchema = z
     S3_BUCKET: z.string().default("plumbline-uploads"),
     S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
     S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+    /** The payments API the `stripe` SDK talks to: the local fake by default (4570 for the
+     *  demo), https://api.stripe.com live. */
+    PAYMENTS_URL: z.url().default("http://127.0.0.1:4570"),
+    /** The payments API's secret key; the demo's opens only the local fake. */
+    STRIPE_SECRET_KEY: z.string().min(8).optional(),
+    /** The webhook endpoint's signing secret (whsec_…); the demo's is published above. */
+    STRIPE_WEBHOOK_SECRET: z.string().min(8).optional(),
     /** Demo and tests only (refused unless PLUMBLINE_MODE=demo): the server's clock starts at
      *  this instant, ISO 8601 with a zone ("2031-06-02T09:00:00Z"), and runs on (lib/clock.ts). */
     PLUMBLINE_FAKE_NOW: z.preprocess(
@@ -88,6 +98,12 @@ const envSchema = z
     ...env,
     // Live without a secret stays without one: Auth.js then signs and accepts nothing.
     AUTH_SECRET: env.AUTH_SECRET ?? (env.PLUMBLINE_MODE === "demo" ? DEMO_AUTH_SECRET : undefined),
+    // Live without keys takes no payments (lib/payments/payments-client.ts says so).
+    STRIPE_SECRET_KEY:
+      env.STRIPE_SECRET_KEY ?? (env.PLUMBLINE_MODE === "demo" ? DEMO_STRIPE_SECRET_KEY : undefined),
+    STRIPE_WEBHOOK_SECRET:
+      env.STRIPE_WEBHOOK_SECRET ??
+      (env.PLUMBLINE_MODE === "demo" ? DEMO_STRIPE_WEBHOOK_SECRET : undefined),
   }));
 
 export type Env = z.infer<typeof envSchema>;

@@ -41,7 +41,8 @@ WORKER_PID=$!
 trap 'kill "$SERVICES_PID" "$WORKER_PID" 2>/dev/null || true' EXIT INT TERM
 mailbox_port="${MAILBOX_URL:-http://127.0.0.1:2580}"; mailbox_port="${mailbox_port##*:}"; mailbox_port="${mailbox_port%%/*}"
 s3_port="${S3_ENDPOINT:-http://127.0.0.1:4568}"; s3_port="${s3_port##*:}"; s3_port="${s3_port%%/*}"
-wait_port "${SMTP_PORT:-2525}" && wait_port "$mailbox_port" && wait_port "$s3_port" || { say "local service fakes did not start"; exit 1; }
+payments_port="${PAYMENTS_URL:-http://127.0.0.1:4570}"; payments_port="${payments_port##*:}"; payments_port="${payments_port%%/*}"
+wait_port "${SMTP_PORT:-2525}" && wait_port "$mailbox_port" && wait_port "$s3_port" && wait_port "$payments_port" || { say "local service fakes did not start"; exit 1; }
 
 say "Plumbline on $APP_URL — demo accounts are in README.md (Ctrl-C to stop)"
 node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"

@@ -50,7 +50,14 @@ export const tinySizes: BenchSizes = {
   eventSyncBatches: 2,
 };
 
-export type BenchPorts = { app: number; smtp: number; mailbox: number; s3: number; db: number };
+export type BenchPorts = {
+  app: number;
+  smtp: number;
+  mailbox: number;
+  s3: number;
+  payments: number;
+  db: number;
+};
 
 export type BenchOptions = {
   tiny: boolean;
@@ -72,7 +79,7 @@ function portFrom(value: string | undefined, fallback: number, name: string): nu
 
 /**
  * Read the command line (`--tiny`, `--out <dir>`) and the environment (`PLUMBLINE_BENCH_TINY=1`,
- * `PLUMBLINE_BENCH_APP_PORT`, `_SMTP_PORT`, `_MAILBOX_PORT`, `_S3_PORT`, `PLUMBLINE_DB_PORT`).
+ * `PLUMBLINE_BENCH_APP_PORT`, `_SMTP_PORT`, `_MAILBOX_PORT`, `_S3_PORT`, `_PAYMENTS_PORT`, `PLUMBLINE_DB_PORT`).
  * The full run writes to bench/, a tiny one to .data/bench-tiny/ unless told otherwise.
  */
 export function parseBenchOptions(
@@ -96,6 +103,11 @@ export function parseBenchOptions(
       smtp: portFrom(source.PLUMBLINE_BENCH_SMTP_PORT, 2825, "PLUMBLINE_BENCH_SMTP_PORT"),
       mailbox: portFrom(source.PLUMBLINE_BENCH_MAILBOX_PORT, 2880, "PLUMBLINE_BENCH_MAILBOX_PORT"),
       s3: portFrom(source.PLUMBLINE_BENCH_S3_PORT, 4868, "PLUMBLINE_BENCH_S3_PORT"),
+      payments: portFrom(
+        source.PLUMBLINE_BENCH_PAYMENTS_PORT,
+        4870,
+        "PLUMBLINE_BENCH_PAYMENTS_PORT",
+      ),
       db: portFrom(source.PLUMBLINE_DB_PORT, 3307, "PLUMBLINE_DB_PORT"),
     },
     outDir: path.resolve(root, outArg ?? (tiny ? ".data/bench-tiny" : "bench")),

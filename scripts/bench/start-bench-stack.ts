@@ -39,6 +39,7 @@ export async function startBenchStack(
   await assertPortFree(ports.smtp, "bench SMTP fake");
   await assertPortFree(ports.mailbox, "bench mailbox API");
   await assertPortFree(ports.s3, "bench S3 fake");
+  await assertPortFree(ports.payments, "bench payments fake");
   const distDir = process.env.NEXT_DIST_DIR ?? ".next-test";
   if (!existsSync(path.join(root, distDir, "BUILD_ID")))
     throw new Error(
@@ -59,6 +60,7 @@ export async function startBenchStack(
     SMTP_PORT: String(ports.smtp),
     MAILBOX_URL: `http://127.0.0.1:${ports.mailbox}`,
     S3_ENDPOINT: `http://127.0.0.1:${ports.s3}`,
+    PAYMENTS_URL: `http://127.0.0.1:${ports.payments}`,
     NEXT_DIST_DIR: distDir,
     PLUMBLINE_MODE: "demo",
     // The bench signs in as many accounts from one address; it plays the one trusted proxy.

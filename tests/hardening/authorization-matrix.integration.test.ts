@@ -142,6 +142,17 @@ const routes: Record<string, Row> = {
     ),
   },
   "GET /api/health": { expect: all(200), call: get(() => "/api/health") },
+  // ── payments (issue 11) ──
+  // Public: the payments service has no session; the signature is the guard, so an unsigned
+  // delivery is 400 for everyone and changes nothing.
+  "POST /api/payments/webhook": {
+    expect: all(400),
+    call: post(
+      () => "/api/payments/webhook",
+      () => json({ id: "evt_matrix", type: "checkout.session.completed" }),
+    ),
+  },
+  // ── end payments ──
   // Exports (issue 10): the tech results for every official; the chief scrutineer's report for
   // the chief scrutineer and the clerk of course (Motorsport UK NCR 2026 Ch.5 Part A App.6 Art.3.1).
   "GET /api/events/[eventId]/tech-results/csv": {
@@ -188,6 +199,28 @@ const settingsJson = JSON.stringify({
 });
 
 const actions: Record<string, Row> = {
+  // ── payments (issue 11) ──
+  // The entry's driver or car owner only. Car 7's fee is paid in the demo, so its driver is let
+  // through and told so (nothing written); withdrawing it is refused because its event is running.
+  "app/(entrant)/entries/[entryId]/pay/actions.ts#startCheckoutAction": {
+    expect: signedInPage(only(200, "owner")),
+    call: action(
+      "app/(entrant)/entries/[entryId]/pay/actions.ts#startCheckoutAction",
+      (c) => `/entries/${c.entryId}/pay`,
+      (c) => ({ entryId: c.entryId }),
+      { status: "idle" },
+    ),
+  },
+  "app/(entrant)/entries/[entryId]/withdraw/actions.ts#withdrawEntryAction": {
+    expect: signedInPage(only(200, "owner")),
+    call: action(
+      "app/(entrant)/entries/[entryId]/withdraw/actions.ts#withdrawEntryAction",
+      (c) => `/entries/${c.entryId}/withdraw`,
+      (c) => ({ entryId: c.entryId, confirm: "yes" }),
+      { status: "idle" },
+    ),
+  },
+  // ── end payments ──
   // Each is let through and then refused without writing: a stale revision, no published sheet,
   // no such car.
   "app/(officials)/clerk/[eventId]/actions.ts#buildRunGroupsAction": clerkAction(

@@ -1,8 +1,10 @@
 // Vitest global setup for *.integration.test.ts: a fresh MariaDB database with migrations and the
-// demo data, the local mail and storage fakes, the built app (`next start`) on test ports and the
+// demo data, the local mail, storage and payments fakes, the built app (`next start`) on test ports and the
 // job worker beside it.
 import path from "node:path";
 import type { TestProject } from "vitest/node";
+import { DEMO_STRIPE_WEBHOOK_SECRET } from "../../lib/env";
+import { startPaymentsFake } from "../../scripts/fakes/payments-fake";
 import { startS3Fake } from "../../scripts/fakes/s3-fake";
 import { startSmtpFake } from "../../scripts/fakes/smtp-fake";
 import { prepareDatabase } from "./prepare-database";
@@ -16,6 +18,7 @@ declare module "vitest" {
     appUrl: string;
     databaseUrl: string;
     mailboxUrl: string;
+    paymentsUrl: string;
   }
 }
 
@@ -37,6 +40,11 @@ export default async function setup(project: TestProject) {
     dir: `${dir}/s3`,
     bucket: "plumbline-uploads",
   });
+  const payments = await startPaymentsFake({
+    port: testPorts.payments,
+    webhookUrl: `${env.APP_URL}/api/payments/webhook`,
+    webhookSecret: DEMO_STRIPE_WEBHOOK_SECRET,
+  });
   const app = await startAppServer({ port: testPorts.app, env });
   // Fast polling and short leases: the tests wait for verdicts and take over a dead worker's jobs.
   const worker = await startWorker({
@@ -47,9 +55,10 @@ export default async function setup(project: TestProject) {
   project.provide("appUrl", app.url);
   project.provide("databaseUrl", database.url);
   project.provide("mailboxUrl", env.MAILBOX_URL ?? "");
+  project.provide("paymentsUrl", payments.url);
   return async () => {
     await Promise.all([app.stop(), worker.stop()]);
-    await Promise.allSettled([smtp.close(), s3.close()]);
+    await Promise.allSettled([smtp.close(), s3.close(), payments.close()]);
     await database.drop();
   };
 }

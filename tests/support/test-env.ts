@@ -1,9 +1,10 @@
-// Ports and names the test run uses, apart from a running `npm start` demo (3000/2525/2580/4568).
+// Ports and names the test run uses, apart from a running `npm start` demo (3000/2525/2580/4568/4570).
 export const testPorts = {
   app: Number(process.env.PLUMBLINE_TEST_APP_PORT ?? 3200),
   smtp: Number(process.env.PLUMBLINE_TEST_SMTP_PORT ?? 2625),
   mailbox: Number(process.env.PLUMBLINE_TEST_MAILBOX_PORT ?? 2680),
   s3: Number(process.env.PLUMBLINE_TEST_S3_PORT ?? 4668),
+  payments: Number(process.env.PLUMBLINE_TEST_PAYMENTS_PORT ?? 4670),
   db: Number(process.env.PLUMBLINE_DB_PORT ?? 3307),
 };
 
@@ -25,6 +26,7 @@ export function testServiceEnv(
     SMTP_PORT: String(testPorts.smtp),
     MAILBOX_URL: `http://127.0.0.1:${testPorts.mailbox}`,
     S3_ENDPOINT: `http://127.0.0.1:${testPorts.s3}`,
+    PAYMENTS_URL: `http://127.0.0.1:${testPorts.payments}`,
     NEXT_DIST_DIR: testDistDir,
     // The tests run the demo's accounts and mailbox, and ask for it (the default is live).
     PLUMBLINE_MODE: "demo",
