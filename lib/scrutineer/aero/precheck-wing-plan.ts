@@ -131,9 +131,11 @@ export function precheckWingPlan({
       mm: checkAeroRules(cls, inMm).filter(isPlanned),
       in: checkAeroRules(cls, inIn).filter(isPlanned),
     };
+    const worded = byUnit.mm.map((r, i) =>
+      unitFor(r.ruleId, plan) === "mm" ? r : (byUnit.in[i] ?? r),
+    );
     const limits: PlannedLimit[] = byUnit.mm.map((r, i) => {
       const unit = unitFor(r.ruleId, plan);
-      const worded = unit === "mm" ? r : (byUnit.in[i] ?? r);
       const show = (mm: number | null) => (mm === null ? null : convertLength(mm, "mm", unit));
       const offset = r.ruleId === "wing-span" ? bodyMm : 0;
       const reading = r.reading === null ? null : r.reading.value + offset;
@@ -148,7 +150,7 @@ export function precheckWingPlan({
         words:
           r.ruleId === "wing-allowed"
             ? `A wing is planned; ${cls.name} allows none`
-            : worded.reason,
+            : (worded[i] ?? r).reason,
       };
     });
     const fits = limits.every((l) => l.fits);
@@ -162,7 +164,8 @@ export function precheckWingPlan({
         classId: cls.id,
         className: cls.name,
         fit: fits ? "fits" : "over",
-        rules: byUnit.mm,
+        // Each rule worded in its own field's unit (the drawings write its margin as given).
+        rules: worded,
       },
     };
   });
