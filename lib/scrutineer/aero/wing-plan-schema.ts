@@ -32,7 +32,8 @@ const positive = planLengthSchema.refine((l) => l.value > 0, { message: "Must be
  * An entrant's wing, planned before it is built, on their car. Lengths are kept as typed (number
  * and unit per field) so the answers come back in the same units.
  * - car: body width at its widest (mirrors excluded), roof's highest point from the ground, and
- *   how far the rearmost bodywork sits behind the rear axle's centre line (for the drawings).
+ *   how far the rearmost bodywork sits behind the rear axle's centre line (kept with the plan for
+ *   the builder's reference; no limit uses it: overhang is measured from the bodywork itself).
  * - wing.span: the span between the end plates' outer faces, or its parts: two equal halves and
  *   two end plates (span = 2 × half + 2 × end plate, end plates counted).
  * - wing.endPlate: each end plate's thickness (rules that do not count end plates take both off).
