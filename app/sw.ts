@@ -27,12 +27,13 @@ const serwist = new Serwist({
   navigationPreload: true,
   runtimeCaching: [
     {
-      // Pages people open on the pad (tech line, passes, entries): network first, the saved copy
-      // when there is no signal. "Prepare for offline" puts the tech line's pages in this cache.
+      // Pages people open on the pad (tech line, passes, entries) and the entrant's pre-check:
+      // network first, the saved copy when there is no signal. "Prepare for offline" puts the
+      // tech line's pages in this cache; the pre-check keeps its own page there.
       matcher: ({ request, sameOrigin, url }) =>
         sameOrigin &&
         request.mode === "navigate" &&
-        /^\/(tech|entries|p|board)\//.test(url.pathname),
+        (/^\/(tech|entries|p|board)\//.test(url.pathname) || url.pathname === "/pre-check"),
       handler: new NetworkFirst({
         cacheName: TECH_PAGES_CACHE,
         networkTimeoutSeconds: 4,

@@ -338,6 +338,45 @@ const actions: Record<string, Row> = {
     ),
   },
   // ── end of events & entering ─────────────────────────────────────────────────────────────
+  // ── pre-check (issue 11, part 6) ──────────────────────────────────────────────────────────
+  // A public page; saving and deleting need a signed-in person and act on their own cars and
+  // plans only: each caller is let through and refused for a car or plan that is not theirs.
+  "app/pre-check/actions.ts#saveAeroPlanAction": {
+    expect: signedIn(200),
+    call: action(
+      "app/pre-check/actions.ts#saveAeroPlanAction",
+      () => "/pre-check",
+      () => ({
+        carId: randomUUID(),
+        name: "matrix test",
+        plan: JSON.stringify({
+          car: {
+            bodyWidth: { value: 64, unit: "in" },
+            roofHeight: { value: 52, unit: "in" },
+            rearmostBodywork: { value: 36, unit: "in" },
+          },
+          wing: {
+            span: { kind: "parts", half: { value: 32, unit: "in" } },
+            endPlate: { value: 0.25, unit: "in" },
+            chord: { value: 10, unit: "in" },
+            height: { value: 58, unit: "in" },
+            mount: { distance: { value: 3, unit: "in" }, direction: "behind" },
+          },
+        }),
+      }),
+      { status: "idle" },
+    ),
+  },
+  "app/pre-check/actions.ts#deleteAeroPlanAction": {
+    expect: signedIn(200),
+    call: action(
+      "app/pre-check/actions.ts#deleteAeroPlanAction",
+      () => "/pre-check",
+      () => ({ planId: randomUUID() }),
+      { status: "idle" },
+    ),
+  },
+  // ── end pre-check ─────────────────────────────────────────────────────────────────────────
   "app/(auth)/sign-in/actions.ts#signInWithPassword": {
     // Public: anyone may try; a wrong password is answered on the form.
     expect: all(200),
