@@ -29,7 +29,8 @@ export function EntryForm({
   eventSlug: string;
   cars: Array<{ id: string; label: string }>;
   classes: Array<{ id: string; name: string; summary: string }>;
-  classFits?: Record<string, ClassFit>;
+  /** The pre-check per car id, then per class id (the picker shows the chosen car's). */
+  classFits?: Record<string, Record<string, ClassFit>>;
   action: (state: EnterEventState, form: FormData) => Promise<EnterEventState>;
 }) {
   const [state, formAction, pending] = useActionState(action, { status: "idle" });
@@ -44,6 +45,7 @@ export function EntryForm({
     },
   });
   const errors = form.formState.errors;
+  const chosenCar = form.watch("carId");
   const messages = (name: keyof EntryFormInput) =>
     errors[name]?.message ? [String(errors[name]?.message)] : state.fields?.[name];
   const onValid = () => {
@@ -82,12 +84,21 @@ export function EntryForm({
       <div>
         <ClassPicker
           classes={classes}
-          classFits={classFits}
+          classFits={chosenCar ? classFits?.[chosenCar] : undefined}
           field={form.register("classId")}
           invalid={Boolean(messages("classId"))}
           describedBy="entry-class-error"
         />
         <FieldError id="entry-class-error" messages={messages("classId")} />
+        {chosenCar && !classFits?.[chosenCar] ? (
+          <p className="mt-2 text-base" data-testid="no-wing-plan">
+            No wing plan is saved for this car.{" "}
+            <a href={`/pre-check?event=${encodeURIComponent(eventSlug)}`} className="underline">
+              Pre-check a wing design
+            </a>{" "}
+            to see which classes it fits before you choose.
+          </p>
+        ) : null}
       </div>
       <div>
         <label htmlFor="entry-lap-time" className="field-label">

@@ -17,6 +17,8 @@ export async function listEnterableCars({ userId, eventId }: { userId: string; e
       model: cars.model,
       year: cars.year,
       colour: cars.colour,
+      bodyWidthMm: cars.bodyWidthMm,
+      roofHeightMm: cars.roofHeightMm,
     })
     .from(cars)
     .where(and(eq(cars.ownerId, userId), isNull(cars.retiredAt), notInArray(cars.id, inEvent)))

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { EntryForm } from "@/components/entry-form";
+import { listAeroPlans } from "@/db/queries/aero-plans/list-aero-plans";
 import { getPublicEvent } from "@/db/queries/entering/get-public-event";
 import { listEnterableCars } from "@/db/queries/entering/list-enterable-cars";
 import { getEventRuleSet } from "@/db/queries/get-event-rule-set";
@@ -12,6 +13,7 @@ import { entryWindowProblem } from "@/lib/entries/entry-window-problem";
 import { placesLeft } from "@/lib/entries/places-left";
 import { formatMoney } from "@/lib/format-money";
 import { formatEventDay } from "@/lib/passes/format-event-day";
+import { fitCarToClasses } from "@/lib/scrutineer/aero/fit-car-to-classes";
 import { describeRuleSet } from "@/lib/scrutineer/rule-sets/describe-rule-set";
 import { displayUnits } from "@/lib/scrutineer/units/display-units";
 import { enterEventAction } from "./actions";
@@ -31,7 +33,18 @@ export default async function EnterEventPage({ params }: { params: Promise<{ slu
     { status: event.status, opensAt: event.entriesOpenAt, closesAt: event.entriesCloseAt },
     clock.now(),
   );
-  const cars = await listEnterableCars({ userId: user.id, eventId: event.id });
+  const [cars, plans] = await Promise.all([
+    listEnterableCars({ userId: user.id, eventId: event.id }),
+    listAeroPlans({ ownerId: user.id }),
+  ]);
+  // The pre-check beside each class: each car's newest saved wing plan on its own figures (a
+  // car with no plan gets a pointer to the pre-check instead).
+  const classFits = Object.fromEntries(
+    cars.flatMap((car) => {
+      const plan = plans.find((p) => p.carId === car.id)?.plan;
+      return plan ? [[car.id, fitCarToClasses({ car, plan, ruleSet: rules.ruleSet })]] : [];
+    }),
+  );
   const left = placesLeft({ capacity: event.capacity, entered: event.entered });
   return (
     <div className="space-y-6">
@@ -72,6 +85,7 @@ export default async function EnterEventPage({ params }: { params: Promise<{ slu
           classes={classSummaries(
             describeRuleSet(rules.ruleSet, displayUnits({ length: rules.unitSystem })),
           )}
+          classFits={classFits}
           action={enterEventAction}
         />
       )}
