@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { readCarFileForm } from "@/lib/cars/car-file-form";
+import { parseCarFileForm, readCarFileForm } from "@/lib/cars/car-file-form";
 import { carParams } from "@/lib/cars/car-route-params";
 import { getOwnCar } from "@/lib/cars/get-own-car";
 import { storeCarFile } from "@/lib/cars/store-car-file";
@@ -13,7 +13,8 @@ export const POST = defineRoute({
   body: { form: readCarFileForm, limit: "upload" },
   handler: async (_request, { params, user, body }) => {
     await getOwnCar({ carId: params.carId, userId: user.id });
-    const file = await storeCarFile({ carId: params.carId, ...body, uploadedBy: user.id });
+    const form = parseCarFileForm(body);
+    const file = await storeCarFile({ carId: params.carId, ...form, uploadedBy: user.id });
     return NextResponse.json({ file }, { status: 201 });
   },
 });
