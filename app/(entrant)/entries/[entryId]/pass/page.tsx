@@ -48,7 +48,7 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
           <PassCarLine carNumber={pass.claims.car} move={move} />
           {/* Into the card's padding on a phone (the bigger the modules, the better it scans), but
               never past the card's edge: the white quiet zone is inside the SVG. */}
-          <div className="pass-qr-frame -mx-3 sm:mx-0">
+          <div className="pass-qr-frame -mx-3">
             <PassQr
               svg={pass.qrSvg}
               url={pass.url}
