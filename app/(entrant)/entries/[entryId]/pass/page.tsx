@@ -37,7 +37,7 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
       </div>
       {pass ? (
         <section
-          className="pass-card card space-y-4"
+          className="pass-card card -mx-4 space-y-4 rounded-none border-x-0 sm:mx-0 sm:rounded-xl sm:border-x"
           aria-label={`Pass for car ${pass.claims.car}`}
           data-testid="pass-card"
           data-pass-label={`Car ${pass.claims.car} · ${entry.eventName}`}
@@ -46,9 +46,10 @@ export default async function EntryPassPage({ params }: { params: Promise<{ entr
             Show this at the tech line
           </p>
           <PassCarLine carNumber={pass.claims.car} move={move} />
-          {/* Into the card's padding on a phone (the bigger the modules, the better it scans), but
-              never past the card's edge: the white quiet zone is inside the SVG. */}
-          <div className="pass-qr-frame -mx-3">
+          {/* On a phone the card spans the screen and the QR its padding too (the bigger the
+              modules, the better it scans), but never past the card's edge: the white quiet zone
+              is inside the SVG. */}
+          <div className="pass-qr-frame -mx-4 sm:-mx-[calc(1rem-1px)]">
             <PassQr
               svg={pass.qrSvg}
               url={pass.url}
