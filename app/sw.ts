@@ -7,6 +7,11 @@ import { ExpirationPlugin, NetworkFirst, NetworkOnly, Serwist } from "serwist";
 import { awaitFreshVerdicts } from "@/lib/offline/await-fresh-verdicts";
 import { drainOutbox } from "@/lib/offline/drain-outbox";
 import { OUTBOX_SYNC_TAG, TECH_PAGES_CACHE } from "@/lib/offline/outbox-constants";
+import {
+  PASS_PAGE_PATH,
+  PASS_PAGES_CACHE,
+  PASS_PAGES_MAX_AGE_SECONDS,
+} from "@/lib/offline/pass-pages-cache";
 
 declare global {
   interface WorkerGlobalScope extends SerwistGlobalConfig {
@@ -26,6 +31,20 @@ const serwist = new Serwist({
   clientsClaim: true,
   navigationPreload: true,
   runtimeCaching: [
+    {
+      // The entrant's pass: network first, the saved copy with no signal, kept for weeks (a pass
+      // opened well before the event must open at the gate); the page saves itself on a first visit.
+      matcher: ({ request, sameOrigin, url }) =>
+        sameOrigin && request.mode === "navigate" && PASS_PAGE_PATH.test(url.pathname),
+      handler: new NetworkFirst({
+        cacheName: PASS_PAGES_CACHE,
+        networkTimeoutSeconds: 4,
+        matchOptions: { ignoreSearch: true, ignoreVary: true },
+        plugins: [
+          new ExpirationPlugin({ maxEntries: 20, maxAgeSeconds: PASS_PAGES_MAX_AGE_SECONDS }),
+        ],
+      }),
+    },
     {
       // Pages people open on the pad (tech line, passes, entries) and the entrant's pre-check:
       // network first, the saved copy when there is no signal. "Prepare for offline" puts the

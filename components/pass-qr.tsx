@@ -2,15 +2,20 @@
  * A pass QR, drawn on the server as SVG markup and placed inline, so the page shows it with no
  * request of its own (it keeps working offline once the page has loaded). The markup comes only
  * from the qrcode package's SVG renderer fed with our own URL, never from user text.
- * It fills the width it is given (no frame or padding: the 4-module quiet zone is white inside the
- * SVG) and is never taller than the screen, so a phone on its side still shows all of it.
+ * It is as wide as the space it is given allows in whole screen pixels per module (CSS
+ * `round(down, 100%, <modules>px)`): modules of unequal width, from scaling by a fraction, are
+ * what a decoder misreads. No frame or padding: the 4-module quiet zone is white inside the SVG.
+ * Never taller than the screen, so a phone on its side still shows all of it.
  */
 export function PassQr({ svg, url, label }: { svg: string; url: string; label: string }) {
+  const modules = Number(/viewBox="0 0 (\d+) \d+"/.exec(svg)?.[1] ?? 0);
   return (
     <figure
       className="mx-auto w-full max-w-[100dvh] bg-white"
+      style={modules > 0 ? { width: `round(down, 100%, ${modules}px)` } : undefined}
       data-testid="pass-qr"
       data-pass-url={url}
+      data-modules={modules || undefined}
     >
       <div
         role="img"

@@ -58,7 +58,7 @@ for (const [name, viewport] of [
   ["phone", phone],
   ["laptop", laptop],
 ] as const) {
-  test(`the pass QR on a ${name} is drawn as wide as the page allows and reads at 1×`, async ({
+  test(`the pass QR on a ${name} is drawn as wide as its card allows and reads at 1×`, async ({
     browser,
   }) => {
     const moved = await movedUpEntrant();
@@ -72,9 +72,17 @@ for (const [name, viewport] of [
     const shown = await decodeShownQr(page);
     // Reference decoder: jsqr (npm), on a screenshot at one image pixel per CSS pixel.
     expect(shown.text).toBe(url);
-    // Edge to edge on the phone; the page column (28rem of 18 px = 504 px) on the laptop. These
-    // are the widths tests/passes/pass-qr.test.ts renders and decodes.
-    expect(shown.width).toBe(name === "phone" ? phone.width : 504);
+    // Whole screen pixels per module, as many as fit: 4 px on the phone (the card spans its
+    // 412 px), 5 px in the laptop's 504 px column; never past the card's edge. These are the
+    // widths tests/passes/pass-qr.test.ts renders and decodes.
+    const modules = Number(await page.getByTestId("pass-qr").getAttribute("data-modules"));
+    expect(shown.width).toBe(modules * (name === "phone" ? 4 : 5));
+    const card = await page.getByTestId("pass-card").boundingBox();
+    const qr = await page.getByTestId("pass-qr").boundingBox();
+    expect(qr?.x ?? -1).toBeGreaterThanOrEqual(card?.x ?? 0);
+    expect((qr?.x ?? 0) + (qr?.width ?? 0)).toBeLessThanOrEqual(
+      (card?.x ?? 0) + (card?.width ?? 0),
+    );
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(
       viewport.width,
     );

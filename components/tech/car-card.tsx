@@ -4,6 +4,7 @@ import { Caution } from "@/components/caution";
 import { VerdictBadge } from "@/components/verdict-badge";
 import { mergeEntryRecords } from "@/lib/offline/merge-entry-records";
 import { previewVerdict } from "@/lib/offline/preview-verdict";
+import { CarFilesPanel } from "./car-files-panel";
 import { ChecklistPanel } from "./checklist-panel";
 import { ChiefDecisionNote } from "./chief-decision-note";
 import { ChiefPanel } from "./chief-panel";
@@ -118,6 +119,7 @@ export function CarCard({ entryId, onBack }: { entryId: string; onBack: () => vo
       <ReadingsPanel entryId={entryId} records={records} verdict={preview} />
       <ChecklistPanel entryId={entryId} records={records} verdict={preview} />
       <PhotosNotesPanel entryId={entryId} records={records} />
+      <CarFilesPanel eventId={pack.event.id} entryId={entryId} />
       {canChief ? <ChiefPanel entryId={entryId} records={records} verdict={preview} /> : null}
     </article>
   );

@@ -1,7 +1,6 @@
 import "server-only";
 import { v7 as uuidv7 } from "uuid";
-import type { z } from "zod";
-import type { carInputSchema } from "../../lib/cars/car-schema";
+import type { CarFields } from "../../lib/cars/car-schema";
 import { clock } from "../../lib/clock";
 import { getDb } from "../client";
 import { auditLog, cars } from "../schema";
@@ -12,14 +11,22 @@ export async function createCar({
   car,
 }: {
   ownerId: string;
-  car: z.output<typeof carInputSchema>;
+  car: CarFields;
 }): Promise<{ id: string }> {
   const id = uuidv7();
   const now = clock.now();
+  const { bodyWidth, roofHeight, ...rest } = car;
   await getDb().transaction(async (tx) => {
-    await tx
-      .insert(cars)
-      .values({ id, ownerId, ...car, notes: car.notes || null, createdAt: now, updatedAt: now });
+    await tx.insert(cars).values({
+      id,
+      ownerId,
+      ...rest,
+      notes: car.notes || null,
+      bodyWidthMm: bodyWidth,
+      roofHeightMm: roofHeight,
+      createdAt: now,
+      updatedAt: now,
+    });
     await tx.insert(auditLog).values({
       actorId: ownerId,
       action: "car.create",

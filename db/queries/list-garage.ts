@@ -1,10 +1,12 @@
 import "server-only";
 import { and, asc, desc, eq, or } from "drizzle-orm";
+import { carFileUrl } from "../../lib/cars/car-file-url";
 import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import { getDb } from "../client";
 import { cars, entries, events, ruleSetVersions, verdicts } from "../schema";
+import { listCarFiles } from "./list-car-files";
 
-/** A person's cars, and every entry they drive, co-drive or own, newest event first. */
+/** A person's cars (with their current files; retired ones too, marked), and every entry they drive, co-drive or own, newest event first. */
 export async function listGarage({ userId }: { userId: string }) {
   const db = getDb();
   const [carRows, entryRows] = await Promise.all([
@@ -16,6 +18,9 @@ export async function listGarage({ userId }: { userId: string }) {
         year: cars.year,
         colour: cars.colour,
         notes: cars.notes,
+        bodyWidthMm: cars.bodyWidthMm,
+        roofHeightMm: cars.roofHeightMm,
+        retiredAt: cars.retiredAt,
       })
       .from(cars)
       .where(eq(cars.ownerId, userId))
@@ -48,8 +53,16 @@ export async function listGarage({ userId }: { userId: string }) {
       )
       .orderBy(desc(events.eventDate), asc(entries.carNumber)),
   ]);
+  const files = await listCarFiles({ carIds: carRows.map((c) => c.id) });
   return {
-    cars: carRows.map((c) => ({ ...c, notes: c.notes ?? "" })),
+    cars: carRows.map((c) => ({
+      ...c,
+      notes: c.notes ?? "",
+      retiredAt: c.retiredAt ? c.retiredAt.toISOString() : null,
+      files: files
+        .filter((f) => f.carId === c.id)
+        .map(({ carId, ...f }) => ({ ...f, url: carFileUrl({ carId, fileId: f.id }) })),
+    })),
     entries: entryRows.map(({ ruleSetBody, ...e }) => {
       const names = classNamesFromRuleSet(ruleSetBody);
       return {

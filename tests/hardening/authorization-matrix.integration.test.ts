@@ -67,6 +67,17 @@ const action =
       await callServerAction(s, { action: name, page: page(c), fields: fields(c), state }),
     );
 
+/** The car of the context's entry (garage & pass rows). */
+async function carOf(c: Ctx): Promise<string> {
+  const [row] = await queryTestDb<{ car_id: string }>(
+    databaseUrl,
+    "select car_id from entries where id = ?",
+    [c.entryId],
+  );
+  if (!row) throw new Error("no car for the entry");
+  return row.car_id;
+}
+
 const routes: Record<string, Row> = {
   "GET /api/auth/[...nextauth]": { expect: all(200), call: get(() => "/api/auth/providers") },
   "POST /api/auth/[...nextauth]": {
@@ -171,6 +182,39 @@ const routes: Record<string, Row> = {
       const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
       return status === 404 ? 200 : status;
     },
+  },
+  // ── garage & pass (issue 11, part 4) ──
+  // Car 7's car belongs to "owner": the owner is let through to the body check (422) or to the
+  // store (no such file: 404); an official of its event sees its files; everyone else 403.
+  "PATCH /api/cars/[carId]": {
+    expect: only(422, "owner"),
+    call: async (s, c) =>
+      (
+        await s.fetch(`/api/cars/${await carOf(c)}`, {
+          ...json({}),
+          method: "PATCH",
+        })
+      ).status,
+  },
+  "POST /api/cars/[carId]/retirement": {
+    expect: only(422, "owner"),
+    call: async (s, c) =>
+      (await s.fetch(`/api/cars/${await carOf(c)}/retirement`, json({ retired: "maybe" }))).status,
+  },
+  "POST /api/cars/[carId]/files": {
+    expect: only(422, "owner"),
+    call: async (s, c) =>
+      (await s.fetch(`/api/cars/${await carOf(c)}/files`, { method: "POST", body: new FormData() }))
+        .status,
+  },
+  "GET /api/cars/[carId]/files/[fileId]": {
+    expect: only(404, "owner", ...officials),
+    call: async (s, c) =>
+      (await s.fetch(`/api/cars/${await carOf(c)}/files/${randomUUID()}`)).status,
+  },
+  "GET /api/events/[eventId]/entries/[entryId]/car-files": {
+    expect: only(200, ...officials),
+    call: get((c) => `/api/events/${c.eventId}/entries/${c.entryId}/car-files`),
   },
 };
 

@@ -156,16 +156,16 @@ describe("the pass QR", () => {
 
   it("decodes at 1× when drawn as big as the pass page draws it on phones and laptops", async () => {
     // Reference decoder: jsqr (npm), one image pixel per screen pixel (device pixel ratio 1).
-    // The pass page draws the QR edge to edge on a phone (412 px on the audit's 412 × 915 screen,
-    // 360 px on a narrow phone) and 504 px wide on a laptop (the page column); e2e/pass-page.spec.ts
-    // checks those widths on the real page.
+    // The pass page draws the QR in whole screen pixels per module (components/pass-qr.tsx):
+    // 4 px on a 360 or 412 px phone (340 px for 85 modules), 5 px on a laptop's 504 px column;
+    // e2e/entrant-pass.spec.ts and e2e/garage-files.spec.ts decode screenshots of the real page.
     const demoUrl = passUrl("http://127.0.0.1:3000", key.sign(claimsFor({ car: 9999 })));
-    for (const width of [360, 412, 504]) {
+    const modules = QRCode.create(demoUrl, passQrOptions).modules.size + 8;
+    for (const width of [4 * modules, 5 * modules]) {
       const png = PNG.sync.read(
         await QRCode.toBuffer(demoUrl, { ...passQrOptions, width, type: "png" }),
       );
-      // qrcode fits whole pixels into the width it is given: at most one short of it.
-      expect(png.width, `width ${width}`).toBeGreaterThanOrEqual(width - 1);
+      expect(png.width, `width ${width}`).toBe(width);
       const read = jsQR(new Uint8ClampedArray(png.data), png.width, png.height);
       expect(read?.data, `width ${width}`).toBe(demoUrl);
     }

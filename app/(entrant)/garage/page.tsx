@@ -1,7 +1,7 @@
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import Link from "next/link";
-import { AddCarForm } from "@/components/add-car-form";
+import { CarForm } from "@/components/car-form";
 import { CarList } from "@/components/car-list";
 import { CarNumberChip } from "@/components/car-number-chip";
 import { ClassLine } from "@/components/class-line";
@@ -81,7 +81,7 @@ export default async function GaragePage() {
         <section className="space-y-3">
           <h2 className="text-2xl font-bold">Your cars</h2>
           <CarList />
-          <AddCarForm />
+          <CarForm />
         </section>
       </HydrationBoundary>
     </div>

@@ -1,7 +1,9 @@
 import { NextResponse } from "next/server";
+import { z } from "zod";
 import { createCar } from "@/db/queries/create-car";
 import { listGarage } from "@/db/queries/list-garage";
-import { carInputSchema } from "@/lib/cars/car-schema";
+import { carInputSchemaFor } from "@/lib/cars/car-schema";
+import { clock } from "@/lib/clock";
 import { defineRoute } from "@/lib/http/define-route";
 
 // GET /api/cars — the signed-in person's garage.
@@ -13,12 +15,15 @@ export const GET = defineRoute({
   },
 });
 
-// POST /api/cars — add a car to the signed-in person's garage.
+// POST /api/cars — add a car to the signed-in person's garage (model year checked against the
+// server's clock).
 export const POST = defineRoute({
   access: { signedIn: true },
-  body: { json: carInputSchema, limit: "default" },
-  handler: async (_request, { user, body: car }) => {
+  body: { json: z.unknown(), limit: "default" },
+  handler: async (_request, { user, body }) => {
+    const car = carInputSchemaFor({ thisYear: clock.now().getUTCFullYear() }).parse(body);
     const { id } = await createCar({ ownerId: user.id, car });
-    return NextResponse.json({ car: { id, ...car } }, { status: 201 });
+    const [saved] = (await listGarage({ userId: user.id })).cars.filter((c) => c.id === id);
+    return NextResponse.json({ car: saved }, { status: 201 });
   },
 });
