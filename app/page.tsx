@@ -14,9 +14,14 @@ export default async function StartPage() {
         Entrants enter their cars and carry a signed pass; scrutineers measure aero and check safety
         items on their phones, even with no signal; the clerk of course groups only cleared cars.
       </p>
-      <Link href="/sign-in" className="btn-primary">
-        Sign in
-      </Link>
+      <div className="flex flex-wrap gap-3">
+        <Link href="/sign-up" className="btn-primary">
+          Create an account
+        </Link>
+        <Link href="/sign-in" className="btn-secondary">
+          Sign in
+        </Link>
+      </div>
     </div>
   );
 }

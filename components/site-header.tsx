@@ -24,10 +24,15 @@ export function SiteHeader({
         <HideOnBoard>
           {userName && signOutAction ? (
             <form action={signOutAction} className="flex min-w-0 items-center gap-3">
-              <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+              <Link
+                href="/profile"
+                className="flex min-h-touch min-w-0 items-center text-base underline decoration-asphalt-400 underline-offset-4"
+                data-testid="signed-in-as"
+                title={`${userName} — your profile`}
+              >
                 <span className="sm:hidden">{shortPersonName(userName)}</span>
                 <span className="hidden sm:inline">{userName}</span>
-              </span>
+              </Link>
               <button
                 type="submit"
                 className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
@@ -36,12 +41,21 @@ export function SiteHeader({
               </button>
             </form>
           ) : (
-            <Link
-              href="/sign-in"
-              className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
-            >
-              Sign in
-            </Link>
+            <nav className="flex items-center gap-2" aria-label="Account">
+              <Link
+                href="/sign-up"
+                className="btn min-h-touch px-3 text-asphalt-50 underline underline-offset-4 hover:bg-asphalt-800"
+              >
+                <span className="sm:hidden">Sign up</span>
+                <span className="hidden sm:inline">Create account</span>
+              </Link>
+              <Link
+                href="/sign-in"
+                className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+              >
+                Sign in
+              </Link>
+            </nav>
           )}
         </HideOnBoard>
       </SiteHeaderRow>
