@@ -160,7 +160,13 @@ const routes: Record<string, Row> = {
       const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
       return status === 404 ? 200 : status;
     },
+  }, // ── accounts (issue 11) ──
+  "GET /sign-up/confirm": {
+    // Public: the link's token is the proof. A token that is not live sends anyone to sign-in.
+    expect: all(303),
+    call: get(() => `/sign-up/confirm?token=${"0".repeat(64)}&email=nobody%40brackenmoor.test`),
   },
+  // ── end accounts ──
 };
 
 // A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
@@ -276,7 +282,37 @@ const actions: Record<string, Row> = {
       () => ({ email: "not an address" }),
       {},
     ),
+  }, // ── accounts (issue 11) ──
+  "app/(auth)/sign-up/actions.ts#signUpWithPassword": {
+    // Public: anyone may ask for an account; bad input is answered on the form.
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-up/actions.ts#signUpWithPassword",
+      () => "/sign-up",
+      () => ({ email: "not an address", fullName: "", password: "x" }),
+      {},
+    ),
   },
+  "app/(auth)/sign-up/actions.ts#signUpWithEmailLink": {
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-up/actions.ts#signUpWithEmailLink",
+      () => "/sign-up",
+      () => ({ email: "not an address", fullName: "" }),
+      {},
+    ),
+  },
+  "app/(signed-in)/profile/actions.ts#saveProfile": {
+    // Anyone signed in, on their own profile only (the id is the session's, never the form's).
+    expect: signedInPage(signedIn(200)),
+    call: action(
+      "app/(signed-in)/profile/actions.ts#saveProfile",
+      () => "/profile",
+      () => ({ fullName: "", dateOfBirth: "not a date" }),
+      {},
+    ),
+  },
+  // ── end accounts ──
 };
 
 // Print layouts: pages, checked by the page itself (loadEventPage); proxy.ts sends a signed-out
