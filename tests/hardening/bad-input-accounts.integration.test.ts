@@ -32,7 +32,10 @@ const junkText = junkValue.map((v) => (typeof v === "string" ? v : (JSON.stringi
 async function expectRefusal(answer: { status: number; text: string }) {
   if (answer.status === 413) return; // refused unread by proxy.ts, in words (bad-input.integration)
   expect(answer.status, answer.text.slice(0, 300)).toBe(200);
-  const message = /"message":"((?:[^"\\]|\\.)*)"/.exec(answer.text)?.[1];
+  // Words: the form's message, or a message beside each field that was wrong.
+  const message =
+    /"message":"((?:[^"\\]|\\.)*)"/.exec(answer.text)?.[1] ??
+    /"fields":\{"\w+":\["((?:[^"\\]|\\.)*)"/.exec(answer.text)?.[1];
   expect(isReadable(message), answer.text.slice(0, 300)).toBe(true);
 }
 
