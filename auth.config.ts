@@ -11,6 +11,7 @@ export const signedInPrefixes = [
   "/organizer",
   "/registration",
   "/home",
+  "/profile",
 ];
 
 /**

@@ -4,6 +4,7 @@ import Credentials from "next-auth/providers/credentials";
 import Nodemailer from "next-auth/providers/nodemailer";
 import { authConfig } from "./auth.config";
 import { getDb } from "./db/client";
+import { clearUnconfirmedPassword } from "./db/queries/accounts/clear-unconfirmed-password";
 import { getUserByEmail } from "./db/queries/get-user-by-email";
 import { accounts, sessions, users, verificationTokens } from "./db/schema";
 import { normalizeEmail } from "./lib/auth/normalize-email";
@@ -23,6 +24,22 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
       // (`type`, not `name`: class names do not survive minification.)
       if ("type" in error && error.type === "CredentialsSignin") return;
       console.error("[auth]", error);
+    },
+  },
+  callbacks: {
+    ...authConfig.callbacks,
+    /**
+     * A sign-in link proves the mailbox, not the password: an account whose address was never
+     * confirmed may carry a password chosen by whoever created it, so that password is dropped
+     * when the mailbox's owner first signs in by link. (The account e-mail's own link confirms
+     * the address first, app/(auth)/sign-up/confirm, so the password chosen at sign-up stays.)
+     */
+    async signIn({ user, account, email }) {
+      // Also called when a link is only asked for (verificationRequest): nothing proven yet.
+      if (account?.type === "email" && !email?.verificationRequest && user.email) {
+        await clearUnconfirmedPassword({ email: user.email });
+      }
+      return true;
     },
   },
   adapter: DrizzleAdapter(getDb(), {

@@ -9,6 +9,7 @@ import { SiteFooter } from "@/components/site-footer";
 import { SiteHeader } from "@/components/site-header";
 import { SiteMain } from "@/components/site-main";
 import { getSessionUser } from "@/lib/auth/get-session-user";
+import { getShownName } from "@/lib/auth/get-shown-name";
 import { Providers } from "./providers";
 import { signOutAction } from "./sign-out-action";
 
@@ -24,13 +25,11 @@ export const viewport: Viewport = { themeColor: "#101214", width: "device-width"
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   const user = await getSessionUser();
+  const shownName = user ? await getShownName(user) : null;
   return (
     <html lang="en-GB">
       <body className="flex min-h-dvh flex-col">
-        <SiteHeader
-          userName={user ? (user.name ?? user.email) : null}
-          signOutAction={signOutAction}
-        />
+        <SiteHeader userName={shownName} signOutAction={signOutAction} />
         <SiteMain>
           <Providers>{children}</Providers>
         </SiteMain>

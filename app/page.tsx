@@ -18,6 +18,9 @@ export default async function StartPage() {
         <Link href="/events" className="btn-primary">
           Find an event
         </Link>
+        <Link href="/sign-up" className="btn-secondary">
+          Create an account
+        </Link>
         <Link href="/sign-in" className="btn-secondary">
           Sign in
         </Link>

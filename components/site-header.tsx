@@ -22,7 +22,7 @@ export function SiteHeader({
           Plumbline
         </Link>
         <HideOnBoard>
-          <div className="flex min-w-0 items-center gap-2">
+          <div className="flex min-w-0 items-center gap-1">
             <Link
               href="/events"
               className="flex min-h-touch items-center px-2 text-lg font-semibold underline-offset-4 hover:underline"
@@ -30,11 +30,16 @@ export function SiteHeader({
               Events
             </Link>
             {userName && signOutAction ? (
-              <form action={signOutAction} className="flex min-w-0 items-center gap-3">
-                <span className="min-w-0 text-base" data-testid="signed-in-as" title={userName}>
+              <form action={signOutAction} className="flex min-w-0 items-center gap-2">
+                <Link
+                  href="/profile"
+                  className="flex min-h-touch min-w-0 items-center text-base underline decoration-asphalt-400 underline-offset-4"
+                  data-testid="signed-in-as"
+                  title={`${userName} — your profile`}
+                >
                   <span className="sm:hidden">{shortPersonName(userName)}</span>
                   <span className="hidden sm:inline">{userName}</span>
-                </span>
+                </Link>
                 <button
                   type="submit"
                   className="btn min-h-touch border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
@@ -43,12 +48,21 @@ export function SiteHeader({
                 </button>
               </form>
             ) : (
-              <Link
-                href="/sign-in"
-                className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
-              >
-                Sign in
-              </Link>
+              <nav className="flex items-center gap-1" aria-label="Account">
+                <Link
+                  href="/sign-up"
+                  className="btn min-h-touch px-2 text-asphalt-50 underline underline-offset-4 hover:bg-asphalt-800"
+                >
+                  <span className="sm:hidden">Sign up</span>
+                  <span className="hidden sm:inline">Create account</span>
+                </Link>
+                <Link
+                  href="/sign-in"
+                  className="btn border-2 border-asphalt-400 text-asphalt-50 hover:bg-asphalt-800"
+                >
+                  Sign in
+                </Link>
+              </nav>
             )}
           </div>
         </HideOnBoard>

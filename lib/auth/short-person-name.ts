@@ -1,13 +1,12 @@
 /**
  * A person's name short enough for a phone's header: first name and the initial of the last
- * ("Priya Raman" → "Priya R."), a one-word name as it is, an e-mail address up to the "@", and
- * anything still over `maxLength` characters cut with an ellipsis.
+ * ("Priya Raman" → "Priya R."), a one-word name as it is. An e-mail address (shown only for someone
+ * who has given no name yet) stays an address, never just the part before the "@". Anything still
+ * over `maxLength` characters is cut with an ellipsis.
  */
 export function shortPersonName(name: string, maxLength = 16): string {
   const trimmed = name.trim();
-  const words = trimmed.includes("@")
-    ? [trimmed.slice(0, trimmed.indexOf("@"))]
-    : trimmed.split(/\s+/).filter(Boolean);
+  const words = trimmed.includes("@") ? [trimmed] : trimmed.split(/\s+/).filter(Boolean);
   const first = words[0] ?? "";
   const last = words.length > 1 ? words[words.length - 1] : undefined;
   const short = last ? `${first} ${Array.from(last)[0]}.` : first;

@@ -1,4 +1,5 @@
 import "server-only";
+import { personName } from "@/lib/auth/person-name";
 import { isRecomputePending } from "../../db/queries/jobs/is-recompute-pending";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
 import { authorizeEntryRead } from "../auth/authorize-entry-read";
@@ -65,7 +66,7 @@ export async function loadEntryResult({
       "Not scrutineered yet. Bring the car and your pass to the tech line.",
     decidedBy: override
       ? formatWhoAndWhen({
-          name: decider ? (decider.name ?? decider.email) : null,
+          name: decider ? personName(decider) : null,
           deviceTime: override.deviceTime,
           timeZone: row.timeZone,
         })

@@ -1,5 +1,6 @@
 import type { EntryDriveSessions } from "../run-sheet/entry-sessions";
 import { formatSessionSpan } from "../run-sheet/format-session-span";
+import { renderMail } from "./render-mail";
 
 /**
  * The e-mail an entrant gets when a published run sheet puts their car in a group or changes its
@@ -20,32 +21,21 @@ export function composeRunSheetMail(opts: {
   entryUrl: string;
 }) {
   const subject = `Car ${opts.carNumber}: run sheet ${opts.version === 1 ? "published" : `updated (version ${opts.version})`} — ${opts.eventName}`;
-  const lines = opts.drives.map(
-    (d) =>
-      `${d.driverName}: ${d.groupName} — ${d.sessions.map((s) => formatSessionSpan(s, opts.timeZone)).join(", ") || "no session fits the day"}`,
-  );
-  const caution =
-    "Times are the venue's local time and can shift on the day; the clerk of course calls each group, and groups are confirmed at the drivers' briefing. The run sheet as published governs.";
   const when = `${opts.dateText}${opts.briefingText ? `; drivers' briefing ${opts.briefingText}` : ""}.`;
-  const text = [
-    `Run sheet version ${opts.version} for ${opts.eventName}, car ${opts.carNumber}:`,
-    when,
-    "",
-    ...lines,
-    ...(opts.changes.length > 0 ? ["", "What changed:", ...opts.changes.map((c) => `- ${c}`)] : []),
-    "",
-    "Your sessions are attached as a calendar file.",
-    `Details: ${opts.entryUrl}`,
-    "",
-    caution,
-  ].join("\n");
-  const esc = (v: string) => v.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-  const html = `<!doctype html><html><body style="font-family:sans-serif;font-size:18px;color:#111">
-<p>Run sheet version ${opts.version} for ${esc(opts.eventName)}, car <strong>${opts.carNumber}</strong>: ${esc(when)}</p>
-<ul>${lines.map((l) => `<li>${esc(l)}</li>`).join("")}</ul>
-${opts.changes.length > 0 ? `<p>What changed:</p><ul>${opts.changes.map((c) => `<li>${esc(c)}</li>`).join("")}</ul>` : ""}
-<p>Your sessions are attached as a calendar file. <a href="${esc(opts.entryUrl)}">See your entry</a></p>
-<p style="font-size:15px;color:#444">${esc(caution)}</p>
-</body></html>`;
-  return { subject, text, html };
+  return renderMail({
+    subject,
+    heading: `Run sheet version ${opts.version} for ${opts.eventName}, car ${opts.carNumber}`,
+    paragraphs: [
+      when,
+      ...(opts.changes.length > 0 ? [`What changed: ${opts.changes.join(" ")}`] : []),
+      "Your sessions are attached as a calendar file.",
+    ],
+    details: opts.drives.map((d) => [
+      d.driverName,
+      `${d.groupName} — ${d.sessions.map((s) => formatSessionSpan(s, opts.timeZone)).join(", ") || "no session fits the day"}`,
+    ]),
+    action: { label: "See your entry", url: opts.entryUrl },
+    footnote:
+      "Times are the venue's local time and can shift on the day; the clerk of course calls each group, and groups are confirmed at the drivers' briefing. The run sheet as published governs.",
+  });
 }

@@ -1,3 +1,5 @@
+import { renderMail } from "./render-mail";
+
 /**
  * The e-mail an entrant gets when a publication takes their car off the run sheet (withdrawn, held,
  * sent back for re-inspection, or moved out by the clerk): it says so, and the caller attaches a
@@ -9,14 +11,13 @@ export function composeRunSheetRemovalMail(opts: {
   version: number;
   entryUrl: string;
 }) {
-  const subject = `Car ${opts.carNumber}: not on run sheet version ${opts.version} — ${opts.eventName}`;
-  const body = `Car ${opts.carNumber} is not on run sheet version ${opts.version} for ${opts.eventName}, so it has no session for now. Only cars cleared at the tech line and signed on are put in run groups. Ask the clerk of course if you think this is wrong.`;
-  const calendar = "The attached calendar file cancels the sessions the earlier version gave you.";
-  const text = [body, "", calendar, `Details: ${opts.entryUrl}`].join("\n");
-  const esc = (v: string) => v.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-  const html = `<!doctype html><html><body style="font-family:sans-serif;font-size:18px;color:#111">
-<p>${esc(body)}</p>
-<p>${esc(calendar)} <a href="${esc(opts.entryUrl)}">See your entry</a></p>
-</body></html>`;
-  return { subject, text, html };
+  return renderMail({
+    subject: `Car ${opts.carNumber}: not on run sheet version ${opts.version} — ${opts.eventName}`,
+    heading: `Car ${opts.carNumber} is not on run sheet version ${opts.version} for ${opts.eventName}`,
+    paragraphs: [
+      "So it has no session for now. Only cars cleared at the tech line and signed on are put in run groups. Ask the clerk of course if you think this is wrong.",
+      "The attached calendar file cancels the sessions the earlier version gave you.",
+    ],
+    action: { label: "See your entry", url: opts.entryUrl },
+  });
 }

@@ -1,4 +1,5 @@
 import { type VerdictWord, verdictLabels } from "../verdict-word";
+import { renderMail } from "./render-mail";
 
 /** The e-mail an entrant gets when the tech line's verdict on their car changes. Pure. */
 export function composeVerdictMail(opts: {
@@ -12,22 +13,11 @@ export function composeVerdictMail(opts: {
 }) {
   const label = verdictLabels[opts.status];
   const classPart = opts.className ? ` (${opts.className})` : "";
-  const subject = `Car ${opts.carNumber}: ${label}${classPart} — ${opts.eventName}`;
-  const text = [
-    `Scrutineering result for car ${opts.carNumber} at ${opts.eventName}: ${label}${classPart}.`,
-    "",
-    opts.reason,
-    "",
-    `Details: ${opts.entryUrl}`,
-    "",
-    opts.notice,
-  ].join("\n");
-  const esc = (v: string) => v.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-  const html = `<!doctype html><html><body style="font-family:sans-serif;font-size:18px;color:#111">
-<p>Scrutineering result for car <strong>${opts.carNumber}</strong> at ${esc(opts.eventName)}: <strong>${esc(label)}${esc(classPart)}</strong>.</p>
-<p>${esc(opts.reason)}</p>
-<p><a href="${esc(opts.entryUrl)}">See the details</a></p>
-<p style="font-size:15px;color:#444">${esc(opts.notice)}</p>
-</body></html>`;
-  return { subject, text, html };
+  return renderMail({
+    subject: `Car ${opts.carNumber}: ${label}${classPart} — ${opts.eventName}`,
+    heading: `Scrutineering result for car ${opts.carNumber} at ${opts.eventName}: ${label}${classPart}.`,
+    paragraphs: [opts.reason],
+    action: { label: "See the details", url: opts.entryUrl },
+    footnote: opts.notice,
+  });
 }

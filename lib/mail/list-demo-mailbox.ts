@@ -7,6 +7,8 @@ export type DemoMessage = {
   to: string[];
   subject: string;
   text: string;
+  /** The HTML part, when the message has one. */
+  html: string | null;
 };
 
 /** Read the local mail fake's store (demo only): newest first, optionally for one address. */

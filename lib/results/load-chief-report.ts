@@ -1,4 +1,5 @@
 import "server-only";
+import { personName } from "@/lib/auth/person-name";
 import { countEventRecordsByEntry } from "../../db/queries/count-event-records-by-entry";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { listEventEntries } from "../../db/queries/list-event-entries";
@@ -33,7 +34,7 @@ export async function loadChiefReport({ eventId }: { eventId: string }): Promise
     verdicts,
     recordCounts,
     classes: rules.ruleSet.classes,
-    officialNames: new Map(officials.map((o) => [o.userId, o.name ?? o.email])),
+    officialNames: new Map(officials.map((o) => [o.userId, personName(o)])),
     timeZone: rules.timeZone,
   });
   return { report, timeZone: rules.timeZone, unitSystem: rules.unitSystem };

@@ -1,4 +1,5 @@
 import "server-only";
+import { personName } from "@/lib/auth/person-name";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
 import { listEventEntries } from "../../db/queries/list-event-entries";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
@@ -23,7 +24,7 @@ export async function loadTechResults({ eventId }: { eventId: string }): Promise
     entries,
     verdicts,
     classes: rules.ruleSet.classes,
-    officialNames: new Map(officials.map((o) => [o.userId, o.name ?? o.email])),
+    officialNames: new Map(officials.map((o) => [o.userId, personName(o)])),
     timeZone: rules.timeZone,
   });
   return { results, timeZone: rules.timeZone, unitSystem: rules.unitSystem };

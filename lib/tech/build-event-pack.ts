@@ -1,5 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
+import { personName } from "@/lib/auth/person-name";
 import { ensureEventPassKey } from "../../db/queries/ensure-event-pass-key";
 import { getEventRecordsStamp } from "../../db/queries/get-event-records-stamp";
 import { getEventRuleSet } from "../../db/queries/get-event-rule-set";
@@ -85,7 +86,7 @@ export async function buildEventPack({
   // One name per person, however many roles they hold.
   const officials = [
     ...new Map(
-      officialRows.map((o) => [o.userId, { userId: o.userId, name: o.name ?? o.email }]),
+      officialRows.map((o) => [o.userId, { userId: o.userId, name: personName(o) }]),
     ).values(),
   ];
   // Rule-set versions are never edited, so the version id stands for the rule set.

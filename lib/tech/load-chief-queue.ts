@@ -1,4 +1,5 @@
 import "server-only";
+import { personName } from "@/lib/auth/person-name";
 import { listEventEntries } from "../../db/queries/list-event-entries";
 import { listEventOfficials } from "../../db/queries/list-event-officials";
 import { listEventVerdicts } from "../../db/queries/list-event-verdicts";
@@ -42,7 +43,7 @@ export async function loadChiefQueue({
     listEventVerdicts({ eventId }),
     listEventOfficials({ eventId }),
   ]);
-  const names = new Map(officials.map((o) => [o.userId, o.name ?? o.email]));
+  const names = new Map(officials.map((o) => [o.userId, personName(o)]));
   const whoAndWhen = (x: { officialId: string; deviceTime: string }) =>
     formatWhoAndWhen({ name: names.get(x.officialId) ?? null, deviceTime: x.deviceTime, timeZone });
   const byEntry = new Map(verdicts.map((v) => [v.entryId, v]));

@@ -9,9 +9,10 @@ describe("shortPersonName", () => {
     expect(shortPersonName("Ólafur Þórsson")).toBe("Ólafur Þ.");
   });
 
-  it("keeps one word as it is and an e-mail address up to the @", () => {
+  it("keeps one word as it is, and an address as an address (never the part before the @)", () => {
     expect(shortPersonName("Gareth")).toBe("Gareth");
-    expect(shortPersonName("clerk@brackenmoor.test")).toBe("clerk");
+    expect(shortPersonName("clerk@bm.test")).toBe("clerk@bm.test");
+    expect(shortPersonName("clerk@brackenmoor.test")).toBe("clerk@brackenmo…");
   });
 
   it("cuts a very long first name with an ellipsis", () => {

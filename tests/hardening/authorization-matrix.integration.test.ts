@@ -182,6 +182,11 @@ const routes: Record<string, Row> = {
       const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
       return status === 404 ? 200 : status;
     },
+  }, // ── accounts (issue 11) ──
+  "GET /sign-up/confirm": {
+    // Public: the link's token is the proof. A token that is not live sends anyone to sign-in.
+    expect: all(303),
+    call: get(() => `/sign-up/confirm?token=${"0".repeat(64)}&email=nobody%40brackenmoor.test`),
   },
   // ── garage & pass (issue 11, part 4) ──
   // Car 7's car belongs to "owner": the owner is let through to the body check (422) or to the
@@ -216,6 +221,7 @@ const routes: Record<string, Row> = {
     expect: only(200, ...officials),
     call: get((c) => `/api/events/${c.eventId}/entries/${c.entryId}/car-files`),
   },
+  // ── end accounts ──
 };
 
 // A form on a signed-in page is never reached signed out: proxy.ts sends the browser to sign in.
@@ -439,7 +445,37 @@ const actions: Record<string, Row> = {
       () => ({ email: "not an address" }),
       {},
     ),
+  }, // ── accounts (issue 11) ──
+  "app/(auth)/sign-up/actions.ts#signUpWithPassword": {
+    // Public: anyone may ask for an account; bad input is answered on the form.
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-up/actions.ts#signUpWithPassword",
+      () => "/sign-up",
+      () => ({ email: "not an address", fullName: "", password: "x" }),
+      {},
+    ),
   },
+  "app/(auth)/sign-up/actions.ts#signUpWithEmailLink": {
+    expect: all(200),
+    call: action(
+      "app/(auth)/sign-up/actions.ts#signUpWithEmailLink",
+      () => "/sign-up",
+      () => ({ email: "not an address", fullName: "" }),
+      {},
+    ),
+  },
+  "app/(signed-in)/profile/actions.ts#saveProfile": {
+    // Anyone signed in, on their own profile only (the id is the session's, never the form's).
+    expect: signedInPage(signedIn(200)),
+    call: action(
+      "app/(signed-in)/profile/actions.ts#saveProfile",
+      () => "/profile",
+      () => ({ fullName: "", dateOfBirth: "not a date" }),
+      {},
+    ),
+  },
+  // ── end accounts ──
 };
 
 // Print layouts: pages, checked by the page itself (loadEventPage); proxy.ts sends a signed-out

@@ -28,6 +28,13 @@ export default async function SignInPage({
         passwordAction={signInWithPassword}
         emailAction={signInWithEmailLink}
       />
+      <p className="text-base">
+        New to Plumbline?{" "}
+        <Link className="font-semibold text-accent underline" href="/sign-up">
+          Create an account
+        </Link>
+        .
+      </p>
       {isDemo ? (
         <p className="text-base text-asphalt-800">
           Trying the demo? Sign-in links land in the{" "}

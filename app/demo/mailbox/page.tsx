@@ -52,7 +52,28 @@ export default async function DemoMailboxPage({
               {new Date(m.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC
             </p>
             <p className="text-lg font-semibold">{m.subject}</p>
-            <MessageText text={m.text} />
+            {m.html ? (
+              <section aria-label="HTML part" className="space-y-1">
+                <p className="text-sm font-semibold uppercase tracking-wide text-asphalt-700">
+                  HTML part
+                </p>
+                {/* The message's own HTML, drawn in a sandbox: no scripts, no forms, no same-origin
+                    access, links open in a new tab. */}
+                <iframe
+                  title={`HTML part of “${m.subject}”`}
+                  srcDoc={`<base target="_blank">${m.html}`}
+                  sandbox="allow-popups allow-popups-to-escape-sandbox"
+                  className="h-96 w-full rounded border-2 border-asphalt-300 bg-white"
+                  data-testid="mail-html"
+                />
+              </section>
+            ) : null}
+            <section aria-label="Text part" className="space-y-1">
+              <p className="text-sm font-semibold uppercase tracking-wide text-asphalt-700">
+                Text part
+              </p>
+              <MessageText text={m.text} />
+            </section>
           </li>
         ))}
       </ul>

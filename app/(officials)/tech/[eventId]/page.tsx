@@ -5,6 +5,7 @@ import { EventHeading } from "@/components/event-heading";
 import { TechLineApp } from "@/components/tech/tech-line-app";
 import { loadEventPage } from "@/lib/auth/load-event-page";
 import { can } from "@/lib/auth/permissions";
+import { personName } from "@/lib/auth/person-name";
 
 export const metadata: Metadata = { title: "Tech line" };
 
@@ -33,7 +34,7 @@ export default async function TechLinePage({ params }: { params: Promise<{ event
         </Caution>
         <TechLineApp
           eventId={eventId}
-          official={{ id: user.id, name: user.name ?? user.email ?? "Official" }}
+          official={{ id: user.id, name: personName(user) || "Official" }}
           canWrite={can(roles, "readings.write")}
           canChief={canChief}
           pagePaths={pagePaths}
