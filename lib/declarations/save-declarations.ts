@@ -4,14 +4,17 @@ import { setEntryDeclarations } from "../../db/queries/entries/set-entry-declara
 import { enqueueJobs } from "../../db/queries/jobs/enqueue-jobs";
 import { runTransaction } from "../../db/run-transaction";
 import { AppError } from "../errors";
+import { zodFieldErrors } from "../http/zod-field-errors";
 import { RECOMPUTE_VERDICTS } from "../jobs/job-kinds";
-import type { EntryDeclarations } from "../scrutineer/classes/entry-declarations-schema";
+import { entryDeclarationsSchema } from "../scrutineer/classes/entry-declarations-schema";
 import { mayDeclare } from "./may-declare";
 
 /**
- * Store an entry's declarations (already parsed by `entryDeclarationsSchema`) and, in the same
- * transaction, queue the recompute of its verdict, so the verdict quotes them. Only the driver
- * or the car's owner; not on a withdrawn entry or a finished event.
+ * Store an entry's declarations and, in the same transaction, queue the recompute of its
+ * verdict, so the verdict quotes them. Only the driver or the car's owner, and not on a
+ * withdrawn entry or a finished event; then the engine's `entryDeclarationsSchema` parses what
+ * was sent (the browser checked it already; this is the check that counts), refusing with field
+ * messages under `declarations.` (e.g. `declarations.dynoSheet.ambient`).
  */
 export async function saveDeclarations({
   entryId,
@@ -20,7 +23,7 @@ export async function saveDeclarations({
 }: {
   entryId: string;
   userId: string;
-  declarations: EntryDeclarations;
+  declarations: unknown;
 }): Promise<void> {
   const facts = await getEntryDeclaringFacts({ entryId });
   if (!facts) throw new AppError("not_found", "No such entry.");
@@ -36,8 +39,18 @@ export async function saveDeclarations({
   if (facts.eventStatus === "finished") {
     throw new AppError("conflict", "This event is over; its declarations are closed.");
   }
+  const parsed = entryDeclarationsSchema.safeParse(declarations);
+  if (!parsed.success) {
+    const fields = Object.fromEntries(
+      Object.entries(zodFieldErrors(parsed.error)).map(([path, messages]) => [
+        path === "_" ? "declarations" : `declarations.${path}`,
+        messages,
+      ]),
+    );
+    throw new AppError("invalid_input", "Some figures need attention.", fields);
+  }
   await runTransaction(async (tx) => {
-    await setEntryDeclarations({ entryId, declarations }, tx);
+    await setEntryDeclarations({ entryId, declarations: parsed.data }, tx);
     await enqueueJobs(
       [{ kind: RECOMPUTE_VERDICTS, payload: { eventId: facts.eventId, entryIds: [entryId] } }],
       tx,

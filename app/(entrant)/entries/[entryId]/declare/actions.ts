@@ -5,9 +5,9 @@ import type { FormState } from "@/components/form-state";
 import { saveDeclarations } from "@/lib/declarations/save-declarations";
 import { defineAction } from "@/lib/http/define-action";
 import { idSchema } from "@/lib/http/id-schema";
-import { entryDeclarationsSchema } from "@/lib/scrutineer/classes/entry-declarations-schema";
 
-/** The declarations travel as one JSON field; parsed again here by the engine's own schema. */
+/** The declarations travel as one JSON field; once the caller is known to be allowed, the
+ *  engine's own schema parses them again (saveDeclarations). */
 const declareInputSchema = z.object({
   entryId: idSchema,
   declarations: z
@@ -20,8 +20,7 @@ const declareInputSchema = z.object({
         ctx.addIssue({ code: "custom", message: "The declarations could not be read" });
         return z.NEVER;
       }
-    })
-    .pipe(entryDeclarationsSchema),
+    }),
 });
 
 // Server action — the driver or car owner saves the entry's declarations; the verdict is
