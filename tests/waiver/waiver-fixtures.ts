@@ -75,9 +75,15 @@ export function sixteenOn(eventDate: string): string {
 /** Remove the people this file made (after their entries). */
 export async function removePeople(databaseUrl: string, ids: string[]) {
   if (ids.length === 0) return;
-  await queryTestDb(
+  const marks = ids.map(() => "?").join(", ");
+  // Rows that name them (their sign-ins in the audit log and the like), found from the foreign keys.
+  const refs = await queryTestDb<{ t: string; c: string }>(
     databaseUrl,
-    `delete from users where id in (${ids.map(() => "?").join(", ")})`,
-    ids,
+    `select table_name as t, column_name as c from information_schema.key_column_usage
+      where table_schema = database() and referenced_table_name = 'users' and referenced_column_name = 'id'`,
   );
+  for (const { t, c } of refs) {
+    await queryTestDb(databaseUrl, `delete from \`${t}\` where \`${c}\` in (${marks})`, ids);
+  }
+  await queryTestDb(databaseUrl, `delete from users where id in (${marks})`, ids);
 }
