@@ -1,12 +1,14 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
+import { entryWaiverState } from "../../lib/entries/entry-waiver-state";
 import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import type { PassReadiness } from "../../lib/passes/pass-blockers";
 import { getDb } from "../client";
 import { entries, events, payments, ruleSetVersions, venues, verdicts, waivers } from "../schema";
 
 /** An entry with what its pass shows (car number, declared class, and the class the stored
- *  verdict runs it in) and what decides whether it may have one, or null. */
+ *  verdict runs it in) and what decides whether it may have one, or null. The waiver counts as
+ *  signed only when every driver's is complete (lib/entries/entry-waiver-state.ts). */
 export async function getEntryForPass({ entryId }: { entryId: string }) {
   const db = getDb();
   const [row] = await db
@@ -16,6 +18,8 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
       carNumber: entries.carNumber,
       declaredClass: entries.declaredClass,
       entryStatus: entries.status,
+      driverId: entries.driverId,
+      coDriverId: entries.coDriverId,
       eventName: events.name,
       eventDate: events.eventDate,
       timeZone: events.timeZone,
@@ -35,11 +39,12 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
     .where(eq(entries.id, entryId))
     .limit(1);
   if (!row) return null;
-  const [[waiver], [payment]] = await Promise.all([
+  const [signed, [payment]] = await Promise.all([
     db
       .select({
-        signed: sql<number>`count(*)`,
-        complete: sql<number>`coalesce(sum(case when ${waivers.isMinor} = 0 or ${waivers.guardianSignedAt} is not null then 1 else 0 end), 0)`,
+        signerId: waivers.signerId,
+        isMinor: waivers.isMinor,
+        guardianSignedAt: waivers.guardianSignedAt,
       })
       .from(waivers)
       .where(and(eq(waivers.eventId, row.eventId), eq(waivers.entryId, entryId))),
@@ -54,13 +59,9 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
         ),
       ),
   ]);
-  const { ruleSetBody, verdictStatus, ...rest } = row;
-  const waiverState: PassReadiness["waiver"] =
-    Number(waiver?.complete ?? 0) > 0
-      ? "signed"
-      : Number(waiver?.signed ?? 0) > 0
-        ? "needs-guardian"
-        : "missing";
+  const { ruleSetBody, verdictStatus, driverId, coDriverId, ...rest } = row;
+  // Every driver of the entry (the driver and an accepted co-driver) signs their own.
+  const waiverState: PassReadiness["waiver"] = entryWaiverState([driverId, coDriverId], signed);
   return {
     ...rest,
     verdictStatus: verdictStatus ?? "waiting",

@@ -1,38 +1,54 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
+import {
+  type EntryWaiverState,
+  entryWaiverState,
+  type WaiverRow,
+} from "../../lib/entries/entry-waiver-state";
 import { getDb } from "../client";
-import { payments, waivers } from "../schema";
+import { entries, payments, waivers } from "../schema";
 
-/** Per entry of an event: whether a waiver is signed (and co-signed for a minor) and the fee paid. */
+/**
+ * Per entry of an event: whether the waiver is complete for every driver (the driver and an
+ * accepted co-driver each signed, a minor's co-signed by a guardian) and the fee paid. Entries
+ * with nothing signed and nothing paid are left out (the callers read them as missing/unpaid).
+ */
 export async function listRegistrationStatus({ eventId }: { eventId: string }) {
   const db = getDb();
-  const [waiverRows, paymentRows] = await Promise.all([
+  const [entryRows, waiverRows, paymentRows] = await Promise.all([
+    db
+      .select({ entryId: entries.id, driverId: entries.driverId, coDriverId: entries.coDriverId })
+      .from(entries)
+      .where(eq(entries.eventId, eventId)),
     db
       .select({
         entryId: waivers.entryId,
-        signed: sql<number>`count(*)`,
-        complete: sql<number>`sum(case when ${waivers.isMinor} = 0 or ${waivers.guardianSignedAt} is not null then 1 else 0 end)`,
+        signerId: waivers.signerId,
+        isMinor: waivers.isMinor,
+        guardianSignedAt: waivers.guardianSignedAt,
       })
       .from(waivers)
-      .where(eq(waivers.eventId, eventId))
-      .groupBy(waivers.entryId),
+      .where(eq(waivers.eventId, eventId)),
     db
       .select({ entryId: payments.entryId })
       .from(payments)
       .where(and(eq(payments.eventId, eventId), eq(payments.status, "paid"))),
   ]);
-  const status = new Map<
-    string,
-    { waiver: "signed" | "needs-guardian" | "missing"; paid: boolean }
-  >();
+  const signedBy = new Map<string, WaiverRow[]>();
   for (const w of waiverRows) {
-    status.set(w.entryId, {
-      waiver: Number(w.complete) > 0 ? "signed" : "needs-guardian",
-      paid: false,
-    });
+    const list = signedBy.get(w.entryId) ?? [];
+    list.push(w);
+    signedBy.set(w.entryId, list);
   }
-  for (const p of paymentRows) {
-    status.set(p.entryId, { waiver: status.get(p.entryId)?.waiver ?? "missing", paid: true });
+  const paid = new Set(paymentRows.map((p) => p.entryId));
+  const status = new Map<string, { waiver: EntryWaiverState; paid: boolean }>();
+  for (const e of entryRows) {
+    const signed = signedBy.get(e.entryId) ?? [];
+    if (signed.length === 0 && !paid.has(e.entryId)) continue;
+    status.set(e.entryId, {
+      waiver: entryWaiverState([e.driverId, e.coDriverId], signed),
+      paid: paid.has(e.entryId),
+    });
   }
   return status;
 }

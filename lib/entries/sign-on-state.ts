@@ -1,7 +1,8 @@
 /** What the sign-on desk records for an entry. */
 export type SignOnRecord = {
-  /** Signed (and co-signed by a guardian for a minor), signed but waiting for the guardian, or
-   *  not signed. */
+  /** Signed by every driver of the entry (the driver and an accepted co-driver; a minor's
+   *  co-signed by a guardian), every driver signed but a guardian still to accept, or some
+   *  driver has not signed (lib/entries/entry-waiver-state.ts). */
   waiver: "signed" | "needs-guardian" | "missing";
   paid: boolean;
 };

@@ -411,12 +411,43 @@ const actions: Record<string, Row> = {
             chord: { value: 10, unit: "in" },
             height: { value: 58, unit: "in" },
             mount: { distance: { value: 3, unit: "in" }, direction: "behind" },
+  // ── declarations & waiver (issue 11, part 5) ──────────────────────────────────────────────
+  // Car 7's driver is let through and refused on the content (a name that is not theirs, a
+  // dyno sheet that cannot be true), so nothing is written; anyone else is refused as not the
+  // entry's driver. The guardian's link is public: a token never sent is refused in words.
+  "app/(entrant)/entries/[entryId]/waiver/actions.ts#signWaiverAction": {
+    expect: signedInPage(only(200, "owner")),
+    call: action(
+      "app/(entrant)/entries/[entryId]/waiver/actions.ts#signWaiverAction",
+      (c) => `/entries/${c.entryId}/waiver`,
+      (c) => ({ entryId: c.entryId, signedName: "matrix test: not a name" }),
+      { status: "idle" },
+    ),
+  },
+  "app/(entrant)/entries/[entryId]/declare/actions.ts#saveDeclarationsAction": {
+    expect: signedInPage(only(200, "owner")),
+    call: action(
+      "app/(entrant)/entries/[entryId]/declare/actions.ts#saveDeclarationsAction",
+      (c) => `/entries/${c.entryId}/declare`,
+      (c) => ({
+        entryId: c.entryId,
+        declarations: JSON.stringify({
+          dynoSheet: {
+            power: { value: 150, unit: "hp" },
+            measuredAt: "wheel",
+            correction: "sae-j1349",
+            ambient: {
+              pressure: { value: 5000, unit: "hPa" },
+              temperature: { value: 20, unit: "C" },
+            },
+            date: "2026-04-01",
           },
         }),
       }),
       { status: "idle" },
     ),
   },
+<<<<<<< HEAD
   "app/pre-check/actions.ts#deleteAeroPlanAction": {
     expect: signedIn(200),
     call: action(
@@ -427,6 +458,18 @@ const actions: Record<string, Row> = {
     ),
   },
   // ── end pre-check ─────────────────────────────────────────────────────────────────────────
+=======
+  "app/guardian/[token]/actions.ts#acceptGuardianWaiverAction": {
+    expect: all(200),
+    call: action(
+      "app/guardian/[token]/actions.ts#acceptGuardianWaiverAction",
+      () => `/guardian/${"A".repeat(43)}`,
+      () => ({ token: "A".repeat(43), guardianName: "matrix test" }),
+      { status: "idle" },
+    ),
+  },
+  // ── end declarations & waiver ────────────────────────────────────────────────────────────
+>>>>>>> i11-waiver
   "app/(auth)/sign-in/actions.ts#signInWithPassword": {
     // Public: anyone may try; a wrong password is answered on the form.
     expect: all(200),
