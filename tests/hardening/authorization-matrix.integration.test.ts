@@ -182,7 +182,8 @@ const routes: Record<string, Row> = {
       const status = (await s.fetch(`/api/events/${c.eventId}/run-sheet/csv`)).status;
       return status === 404 ? 200 : status;
     },
-  }, // ── accounts (issue 11) ──
+  },
+  // ── accounts (issue 11) ──
   "GET /sign-up/confirm": {
     // Public: the link's token is the proof. A token that is not live sends anyone to sign-in.
     expect: all(303),
@@ -411,6 +412,12 @@ const actions: Record<string, Row> = {
             chord: { value: 10, unit: "in" },
             height: { value: 58, unit: "in" },
             mount: { distance: { value: 3, unit: "in" }, direction: "behind" },
+          },
+        }),
+      }),
+      { status: "idle" },
+    ),
+  },
   // ── declarations & waiver (issue 11, part 5) ──────────────────────────────────────────────
   // Car 7's driver is let through and refused on the content (a name that is not theirs, a
   // dyno sheet that cannot be true), so nothing is written; anyone else is refused as not the
@@ -447,7 +454,7 @@ const actions: Record<string, Row> = {
       { status: "idle" },
     ),
   },
-<<<<<<< HEAD
+  // (pre-check, continued)
   "app/pre-check/actions.ts#deleteAeroPlanAction": {
     expect: signedIn(200),
     call: action(
@@ -457,8 +464,6 @@ const actions: Record<string, Row> = {
       { status: "idle" },
     ),
   },
-  // ── end pre-check ─────────────────────────────────────────────────────────────────────────
-=======
   "app/guardian/[token]/actions.ts#acceptGuardianWaiverAction": {
     expect: all(200),
     call: action(
@@ -469,7 +474,6 @@ const actions: Record<string, Row> = {
     ),
   },
   // ── end declarations & waiver ────────────────────────────────────────────────────────────
->>>>>>> i11-waiver
   "app/(auth)/sign-in/actions.ts#signInWithPassword": {
     // Public: anyone may try; a wrong password is answered on the form.
     expect: all(200),
@@ -488,7 +492,8 @@ const actions: Record<string, Row> = {
       () => ({ email: "not an address" }),
       {},
     ),
-  }, // ── accounts (issue 11) ──
+  },
+  // ── accounts (issue 11) ──
   "app/(auth)/sign-up/actions.ts#signUpWithPassword": {
     // Public: anyone may ask for an account; bad input is answered on the form.
     expect: all(200),
