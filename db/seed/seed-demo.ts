@@ -164,6 +164,15 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     }
   }
 
+  // Dates of birth: grown-ups spread over four decades; entry 3's driver is 16 on the day (a minor).
+  const minorDriver = entryRows[3]?.driverId;
+  userRows.forEach((user, i) => {
+    user.dateOfBirth =
+      user.id === minorDriver
+        ? `${Number(eventDate.slice(0, 4)) - 16}${eventDate.slice(4)}`
+        : `${1962 + ((i * 7) % 38)}-${String((i % 12) + 1).padStart(2, "0")}-${String(((i * 3) % 28) + 1).padStart(2, "0")}`;
+  });
+
   const { recordRows, verdictRows } = demoTechLine({
     entryRows,
     eventId,
@@ -260,7 +269,7 @@ export async function seedDemo(db: Db, opts: { today: string }): Promise<DemoSee
     );
     await tx.insert(cars).values(carRows);
     await tx.insert(entries).values(entryRows);
-    await tx.insert(waivers).values(demoWaivers(entryRows, eventId, now));
+    await tx.insert(waivers).values(demoWaivers(entryRows, eventId, now, userRows));
     await tx.insert(payments).values(demoPayments(entryRows, eventId, now));
     if (recordRows.length > 0) await tx.insert(records).values(recordRows);
     if (verdictRows.length > 0) await tx.insert(verdicts).values(verdictRows);
@@ -333,21 +342,28 @@ function demoWaivers(
   rows: (typeof entries.$inferInsert)[],
   eventId: string,
   now: Date,
+  people: (typeof users.$inferInsert)[],
 ): (typeof waivers.$inferInsert)[] {
-  // Most drivers have signed; the last two have not (so the sign-on desk has work). Entry 3's
-  // driver is a minor whose guardian has not co-signed yet.
-  return rows.slice(0, rows.length - 2).map((row, i) => ({
-    id: uuidv7(),
-    eventId,
-    entryId: row.id as string,
-    signerId: row.driverId,
-    signedName: "signed online",
-    signedAt: now,
-    isMinor: i === 3,
-    guardianName: null,
-    guardianSignedAt: null,
-    textVersion: "2027-1",
-  }));
+  const nameOf = (id: string | null | undefined) =>
+    people.find((p) => p.id === id)?.name ?? "signed online";
+  // Most drivers have signed — each driver of a shared car their own — and the last two have not
+  // (so the sign-on desk has work). Entry 3's driver is a minor whose guardian has not co-signed.
+  return rows.slice(0, rows.length - 2).flatMap((row, i) =>
+    [row.driverId, row.coDriverId]
+      .filter((signer): signer is string => typeof signer === "string")
+      .map((signerId) => ({
+        id: uuidv7(),
+        eventId,
+        entryId: row.id as string,
+        signerId,
+        signedName: nameOf(signerId),
+        signedAt: now,
+        isMinor: i === 3 && signerId === row.driverId,
+        guardianName: null,
+        guardianSignedAt: null,
+        textVersion: demoWaiverVersion,
+      })),
+  );
 }
 
 function demoPayments(

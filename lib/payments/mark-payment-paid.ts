@@ -6,10 +6,12 @@ import { lockPayment } from "../../db/queries/payments/lock-payment";
 import { updatePayment } from "../../db/queries/payments/update-payment";
 import type { Tx } from "../../db/run-transaction";
 import { clock } from "../clock";
+import { enqueuePassReadyMail } from "../entries/enqueue-pass-ready-mail";
 import { env } from "../env";
 import { formatMoney } from "../format-money";
 import { SEND_MAIL } from "../jobs/job-kinds";
 import { composePaymentReceiptMail } from "../mail/compose-payment-receipt-mail";
+import { formatLocalDateTime } from "../results/format-local-date-time";
 import { PAYMENTS_PROVIDER } from "./payments-client";
 
 /**
@@ -42,7 +44,7 @@ export async function markPaymentPaid({ session }: { session: Stripe.Checkout.Se
             amountMinor: row.amountMinor,
             currency: row.currency,
             paymentRef,
-            paidAt: `${paidAt.toISOString().replace("T", " ").slice(0, 16)} UTC`,
+            paidAt: formatLocalDateTime(paidAt.toISOString(), facts.timeZone),
             entryUrl: new URL(`/entries/${row.entryId}`, env.APP_URL).toString(),
           }),
           kind: "payment-receipt",
@@ -53,6 +55,8 @@ export async function markPaymentPaid({ session }: { session: Stripe.Checkout.Se
     ],
     tx,
   );
+  // Paying may be the last thing the entry needed: then every driver hears the pass is ready.
+  await enqueuePassReadyMail({ entryId: row.entryId }, tx);
   console.info(
     `[payments] entry ${row.entryId} paid ${formatMoney(row.amountMinor, row.currency)} (${paymentRef})`,
   );

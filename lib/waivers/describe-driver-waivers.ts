@@ -1,4 +1,4 @@
-import { isMinorOn } from "./is-minor-on";
+import { isMinorOn } from "../scrutineer/calendar/age-on-date";
 
 type Driver = { id: string; name: string | null; dateOfBirth: string | null; role: string };
 type Signed = {

@@ -46,16 +46,6 @@ beforeAll(async () => {
   );
   eventId = event?.id ?? "";
   own = await entryWhere("u.email = ?", [demo.entrant]);
-  // Every driver signs the waiver (issue 11): car 7's co-driver too. Until the demo seed signs
-  // for them, this file does, so the demo entrant's own pass is issued as before.
-  await queryTestDb(
-    databaseUrl,
-    `insert into waivers (id, event_id, entry_id, signer_id, signed_name, signed_at, is_minor, text_version)
-     select uuid(), e.event_id, e.id, e.co_driver_id, coalesce(u.name, u.email), utc_timestamp(3), 0, '2027-1'
-       from entries e join users u on u.id = e.co_driver_id
-      where e.id = ? and not exists (select 1 from waivers w where w.entry_id = e.id and w.signer_id = e.co_driver_id)`,
-    [own.id],
-  );
   // The query functions read DATABASE_URL when first imported; point them at this run's database.
   process.env.DATABASE_URL = databaseUrl;
   closeDb = (await import("../../db/client")).closeDb;
