@@ -1,3 +1,4 @@
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import type { ReactElement } from "react";
 import { describe, expect, it } from "vitest";
 import { CarCard } from "@/components/tech/car-card";
@@ -235,10 +236,13 @@ describe("the checklist on the car card", () => {
       local: [],
       record: async () => {},
     };
+    // The card's photo panel reads through TanStack Query, as in the app's providers.
     const markup = render(
-      <TechContext.Provider value={value}>
-        <CarCard entryId="entry-1" onBack={() => {}} />
-      </TechContext.Provider>,
+      <QueryClientProvider client={new QueryClient()}>
+        <TechContext.Provider value={value}>
+          <CarCard entryId="entry-1" onBack={() => {}} />
+        </TechContext.Provider>
+      </QueryClientProvider>,
     );
     expect(textOf(partByTestId(markup, "preview-verdict"))).toMatch(/^Preview on this device/);
     expect(markup).not.toMatch(/on this phone/i);
