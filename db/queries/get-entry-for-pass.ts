@@ -1,10 +1,11 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { entryWaiverState } from "../../lib/entries/entry-waiver-state";
 import { classNamesFromRuleSet } from "../../lib/passes/class-names-from-rule-set";
 import type { PassReadiness } from "../../lib/passes/pass-blockers";
 import { getDb } from "../client";
-import { entries, events, payments, ruleSetVersions, venues, verdicts, waivers } from "../schema";
+import { entries, events, ruleSetVersions, venues, verdicts } from "../schema";
+import { getEntrySignOnRecords } from "./entries/get-entry-sign-on-records";
 
 /** An entry with what its pass shows (car number, declared class, and the class the stored
  *  verdict runs it in) and what decides whether it may have one, or null. The waiver counts as
@@ -39,26 +40,7 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
     .where(eq(entries.id, entryId))
     .limit(1);
   if (!row) return null;
-  const [signed, [payment]] = await Promise.all([
-    db
-      .select({
-        signerId: waivers.signerId,
-        isMinor: waivers.isMinor,
-        guardianSignedAt: waivers.guardianSignedAt,
-      })
-      .from(waivers)
-      .where(and(eq(waivers.eventId, row.eventId), eq(waivers.entryId, entryId))),
-    db
-      .select({ paid: sql<number>`count(*)` })
-      .from(payments)
-      .where(
-        and(
-          eq(payments.eventId, row.eventId),
-          eq(payments.entryId, entryId),
-          eq(payments.status, "paid"),
-        ),
-      ),
-  ]);
+  const { waivers: signed, paid } = await getEntrySignOnRecords({ eventId: row.eventId, entryId });
   const { ruleSetBody, verdictStatus, driverId, coDriverId, ...rest } = row;
   // Every driver of the entry (the driver and an accepted co-driver) signs their own.
   const waiverState: PassReadiness["waiver"] = entryWaiverState([driverId, coDriverId], signed);
@@ -67,7 +49,7 @@ export async function getEntryForPass({ entryId }: { entryId: string }) {
     verdictStatus: verdictStatus ?? "waiting",
     classNames: classNamesFromRuleSet(ruleSetBody),
     waiver: waiverState,
-    paid: Number(payment?.paid ?? 0) > 0,
+    paid,
   };
 }
 

@@ -1,9 +1,10 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { getDb } from "../../client";
 import type { Tx } from "../../run-transaction";
-import { entries, events, payments, users, waivers } from "../../schema";
+import { entries, events, users } from "../../schema";
+import { getEntrySignOnRecords } from "./get-entry-sign-on-records";
 
 const coDriver = alias(users, "co_driver");
 
@@ -32,25 +33,5 @@ export async function getEntrySignOnFacts({ entryId }: { entryId: string }, tx?:
     .where(eq(entries.id, entryId))
     .limit(1);
   if (!row) return null;
-  const [signed, [paid]] = await Promise.all([
-    db
-      .select({
-        signerId: waivers.signerId,
-        isMinor: waivers.isMinor,
-        guardianSignedAt: waivers.guardianSignedAt,
-      })
-      .from(waivers)
-      .where(and(eq(waivers.eventId, row.eventId), eq(waivers.entryId, entryId))),
-    db
-      .select({ count: sql<number>`count(*)` })
-      .from(payments)
-      .where(
-        and(
-          eq(payments.eventId, row.eventId),
-          eq(payments.entryId, entryId),
-          eq(payments.status, "paid"),
-        ),
-      ),
-  ]);
-  return { ...row, waivers: signed, paid: Number(paid?.count ?? 0) > 0 };
+  return { ...row, ...(await getEntrySignOnRecords({ eventId: row.eventId, entryId }, tx)) };
 }
