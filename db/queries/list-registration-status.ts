@@ -5,8 +5,9 @@ import {
   entryWaiverState,
   type WaiverRow,
 } from "../../lib/entries/entry-waiver-state";
+import { countsAsMinor } from "../../lib/waivers/counts-as-minor";
 import { getDb } from "../client";
-import { entries, payments, waivers } from "../schema";
+import { entries, events, payments, users, waivers } from "../schema";
 
 /**
  * Per entry of an event: whether the waiver is complete for every driver (the driver and an
@@ -26,8 +27,12 @@ export async function listRegistrationStatus({ eventId }: { eventId: string }) {
         signerId: waivers.signerId,
         isMinor: waivers.isMinor,
         guardianSignedAt: waivers.guardianSignedAt,
+        dateOfBirth: users.dateOfBirth,
+        eventDate: events.eventDate,
       })
       .from(waivers)
+      .innerJoin(users, eq(users.id, waivers.signerId))
+      .innerJoin(events, eq(events.id, waivers.eventId))
       .where(eq(waivers.eventId, eventId)),
     db
       .select({ entryId: payments.entryId })
@@ -35,9 +40,12 @@ export async function listRegistrationStatus({ eventId }: { eventId: string }) {
       .where(and(eq(payments.eventId, eventId), eq(payments.status, "paid"))),
   ]);
   const signedBy = new Map<string, WaiverRow[]>();
-  for (const w of waiverRows) {
+  for (const { dateOfBirth, eventDate, ...w } of waiverRows) {
     const list = signedBy.get(w.entryId) ?? [];
-    list.push(w);
+    list.push({
+      ...w,
+      isMinor: countsAsMinor({ signedAsMinor: Boolean(w.isMinor), dateOfBirth, eventDate }),
+    });
     signedBy.set(w.entryId, list);
   }
   const paid = new Set(paymentRows.map((p) => p.entryId));

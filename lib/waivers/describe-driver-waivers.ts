@@ -1,4 +1,4 @@
-import { isMinorOn } from "../scrutineer/calendar/age-on-date";
+import { countsAsMinor } from "./counts-as-minor";
 
 type Driver = { id: string; name: string | null; dateOfBirth: string | null; role: string };
 type Signed = {
@@ -29,13 +29,17 @@ export function describeDriverWaivers(
 ): DriverWaiverLine[] {
   return drivers.map((d) => {
     const own = signed.find((w) => w.signerId === d.id);
-    const minor = own?.isMinor ?? (d.dateOfBirth !== null && isMinorOn(d.dateOfBirth, eventDate));
+    const minor = countsAsMinor({
+      signedAsMinor: own?.isMinor ?? false,
+      dateOfBirth: d.dateOfBirth,
+      eventDate,
+    });
     return {
       driverId: d.id,
       who: `${d.name ?? "A driver with no name yet"} (${d.role})`,
       state: !own
         ? "not-signed"
-        : own.isMinor && own.guardianSignedAt === null
+        : minor && own.guardianSignedAt === null
           ? "needs-guardian"
           : "complete",
       minor,

@@ -77,7 +77,8 @@ export async function signWaiver({
     }
     const minor = me.dob !== null && isMinorOn(me.dob, facts.eventDate);
     const own = facts.waivers.find((w) => w.signerId === userId);
-    if (own && (!own.isMinor || own.guardianSignedAt !== null))
+    // Complete, unless the driver's date of birth now says they are a minor on the day.
+    if (own && (!(own.isMinor || minor) || own.guardianSignedAt !== null))
       return { outcome: "already-signed" };
     if (!minor && !own) {
       await insertWaiver(

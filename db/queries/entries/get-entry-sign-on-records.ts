@@ -1,11 +1,12 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
+import { countsAsMinor } from "../../../lib/waivers/counts-as-minor";
 import { getDb } from "../../client";
 import type { Tx } from "../../run-transaction";
-import { payments, waivers } from "../../schema";
+import { events, payments, users, waivers } from "../../schema";
 
-/** What the sign-on rule reads for one entry: every waiver signed for it (by whom, a minor's
- *  guardian or not yet) and whether a payment of its fee stands paid. */
+/** What the sign-on rule reads for one entry: every waiver signed for it (by whom; a minor's —
+ *  as signed, or by the signer's date of birth now — with its guardian's acceptance or not yet) and whether a payment of its fee stands paid. */
 export async function getEntrySignOnRecords(
   { eventId, entryId }: { eventId: string; entryId: string },
   tx?: Tx,
@@ -17,8 +18,12 @@ export async function getEntrySignOnRecords(
         signerId: waivers.signerId,
         isMinor: waivers.isMinor,
         guardianSignedAt: waivers.guardianSignedAt,
+        dateOfBirth: users.dateOfBirth,
+        eventDate: events.eventDate,
       })
       .from(waivers)
+      .innerJoin(users, eq(users.id, waivers.signerId))
+      .innerJoin(events, eq(events.id, waivers.eventId))
       .where(and(eq(waivers.eventId, eventId), eq(waivers.entryId, entryId))),
     db
       .select({ count: sql<number>`count(*)` })
@@ -31,5 +36,11 @@ export async function getEntrySignOnRecords(
         ),
       ),
   ]);
-  return { waivers: signed, paid: Number(paid?.count ?? 0) > 0 };
+  return {
+    waivers: signed.map(({ dateOfBirth, eventDate, ...w }) => ({
+      ...w,
+      isMinor: countsAsMinor({ signedAsMinor: Boolean(w.isMinor), dateOfBirth, eventDate }),
+    })),
+    paid: Number(paid?.count ?? 0) > 0,
+  };
 }
