@@ -19,7 +19,8 @@ export function SiteHeader({
           className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-wide"
         >
           <PlumbMark className="size-8 text-asphalt-50" />
-          Plumbline
+          {/* On the narrowest phones the mark alone leaves room for Events and the account. */}
+          <span className="max-[399px]:sr-only">Plumbline</span>
         </Link>
         <HideOnBoard>
           <div className="flex min-w-0 items-center gap-1">

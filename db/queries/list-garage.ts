@@ -33,6 +33,7 @@ export async function listGarage({ userId }: { userId: string }) {
         eventDate: events.eventDate,
         carNumber: entries.carNumber,
         declaredClass: entries.declaredClass,
+        entryStatus: entries.status,
         make: cars.make,
         model: cars.model,
         status: verdicts.status,

@@ -52,7 +52,16 @@ export default async function GaragePage() {
                   </div>
                 </div>
                 <div className="flex flex-wrap items-center gap-3">
-                  <VerdictBadge status={e.status} toClass={e.finalClass} />
+                  {e.entryStatus === "entered" ? (
+                    <VerdictBadge status={e.status} toClass={e.finalClass} />
+                  ) : (
+                    <span
+                      className="rounded-full border-2 border-asphalt-400 px-3 py-1 font-semibold"
+                      data-testid="entry-standing"
+                    >
+                      {e.entryStatus === "withdrawn" ? "Withdrawn" : "On the waiting list"}
+                    </span>
+                  )}
                   <div className="ml-auto flex gap-2">
                     <Link
                       href={`/entries/${e.entryId}`}
@@ -60,16 +69,18 @@ export default async function GaragePage() {
                       data-testid="entry-result-link"
                       aria-label={`Result for car ${e.carNumber}, ${e.eventName}`}
                     >
-                      Result
+                      {e.entryStatus === "entered" ? "Result" : "Entry"}
                     </Link>
-                    <Link
-                      href={`/entries/${e.entryId}/pass`}
-                      className="btn-secondary min-w-touch"
-                      data-testid="entry-pass-link"
-                      aria-label={`Pass for car ${e.carNumber}, ${e.eventName}`}
-                    >
-                      Pass
-                    </Link>
+                    {e.entryStatus !== "entered" ? null : (
+                      <Link
+                        href={`/entries/${e.entryId}/pass`}
+                        className="btn-secondary min-w-touch"
+                        data-testid="entry-pass-link"
+                        aria-label={`Pass for car ${e.carNumber}, ${e.eventName}`}
+                      >
+                        Pass
+                      </Link>
+                    )}
                   </div>
                 </div>
               </li>

@@ -120,27 +120,40 @@ export default async function EntryPage({
           </Link>
         </section>
       )}
-      <HydrationBoundary state={dehydrate(queryClient)}>
-        <EntryResultView entryId={entryId} />
-      </HydrationBoundary>
-      <EntryRunGroup
-        entryId={entryId}
-        eventId={result.eventId}
-        version={sheet?.version ?? null}
-        publishedAtText={sheet ? formatPublishedAt(sheet.publishedAt, sheet.body.timeZone) : null}
-        timeZone={sheet?.body.timeZone ?? "UTC"}
-        dateText={sheet ? formatEventDate(sheet.body.eventDate) : null}
-        briefingText={briefingOf(sheet)}
-        drives={sheet ? entrySessions(sheet.body, entryId) : []}
-      />
-      <Link href={`/entries/${entryId}/pass`} className="btn-primary w-full sm:w-auto">
-        Show my pass
-      </Link>
-      <Caution title="The result">
-        Plumbline computes verdicts from the scrutineers&apos; readings and the event&apos;s rules.
-        The chief scrutineer has the final say; if you disagree, ask at the tech line. A held car
-        can be fixed and presented again.
-      </Caution>
+      {checklist.status === "withdrawn" ? (
+        <p className="card" data-testid="withdrawn-note">
+          This car will not run at this event.{" "}
+          <Link href={`/entries/${entryId}/pay`} className="font-semibold underline">
+            The entry fee and any refund
+          </Link>
+        </p>
+      ) : checklist.status === "waiting" ? null : (
+        <>
+          <HydrationBoundary state={dehydrate(queryClient)}>
+            <EntryResultView entryId={entryId} />
+          </HydrationBoundary>
+          <EntryRunGroup
+            entryId={entryId}
+            eventId={result.eventId}
+            version={sheet?.version ?? null}
+            publishedAtText={
+              sheet ? formatPublishedAt(sheet.publishedAt, sheet.body.timeZone) : null
+            }
+            timeZone={sheet?.body.timeZone ?? "UTC"}
+            dateText={sheet ? formatEventDate(sheet.body.eventDate) : null}
+            briefingText={briefingOf(sheet)}
+            drives={sheet ? entrySessions(sheet.body, entryId) : []}
+          />
+          <Link href={`/entries/${entryId}/pass`} className="btn-primary w-full sm:w-auto">
+            Show my pass
+          </Link>
+          <Caution title="The result">
+            Plumbline computes verdicts from the scrutineers&apos; readings and the event&apos;s
+            rules. The chief scrutineer has the final say; if you disagree, ask at the tech line. A
+            held car can be fixed and presented again.
+          </Caution>
+        </>
+      )}
     </div>
   );
 }
