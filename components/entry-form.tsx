@@ -24,6 +24,7 @@ export function EntryForm({
   cars,
   classes,
   classFits,
+  defaultExperience,
   action,
 }: {
   eventSlug: string;
@@ -31,6 +32,8 @@ export function EntryForm({
   classes: Array<{ id: string; name: string; summary: string }>;
   /** The pre-check per car id, then per class id (the picker shows the chosen car's). */
   classFits?: Record<string, Record<string, ClassFit>>;
+  /** The experience the profile gives, offered first (the driver may say otherwise here). */
+  defaultExperience?: string | null;
   action: (state: EnterEventState, form: FormData) => Promise<EnterEventState>;
 }) {
   const [state, formAction, pending] = useActionState(action, { status: "idle" });
@@ -42,7 +45,8 @@ export function EntryForm({
       classId: "",
       lapTime: "",
       coDriverEmail: "",
-    },
+      ...(defaultExperience ? { experience: defaultExperience } : {}),
+    } as Partial<EntryFormInput>,
   });
   const errors = form.formState.errors;
   const chosenCar = form.watch("carId");
@@ -124,7 +128,7 @@ export function EntryForm({
           className="field-input"
           aria-invalid={messages("experience") ? true : undefined}
           aria-describedby="entry-experience-error"
-          defaultValue=""
+          defaultValue={defaultExperience ?? ""}
           {...form.register("experience")}
         >
           <option value="" disabled>

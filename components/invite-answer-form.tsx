@@ -18,8 +18,11 @@ export function InviteAnswerForm({
   token,
   accept,
   decline,
+  defaultExperience,
 }: {
   token: string;
+  /** The experience the profile gives, offered first. */
+  defaultExperience?: string | null;
   accept: Action;
   decline: Action;
 }) {
@@ -56,7 +59,7 @@ export function InviteAnswerForm({
             id="invite-experience"
             name="experience"
             className="field-input"
-            defaultValue=""
+            defaultValue={defaultExperience ?? ""}
             required
             aria-invalid={fields?.experience ? true : undefined}
             aria-describedby="invite-experience-error"

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { InviteAnswerForm } from "@/components/invite-answer-form";
+import { getUserProfile } from "@/db/queries/accounts/get-user-profile";
 import { getCoDriverInvite } from "@/db/queries/entering/get-co-driver-invite";
 import { requirePageUser } from "@/lib/auth/require-page-permission";
 import { clock } from "@/lib/clock";
@@ -60,7 +61,12 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
           </Link>
         </div>
       ) : (
-        <InviteAnswerForm token={token} accept={acceptInviteAction} decline={declineInviteAction} />
+        <InviteAnswerForm
+          token={token}
+          accept={acceptInviteAction}
+          decline={declineInviteAction}
+          defaultExperience={(await getUserProfile({ userId: user.id }))?.experienceLevel ?? null}
+        />
       )}
     </div>
   );

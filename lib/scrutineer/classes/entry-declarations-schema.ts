@@ -9,7 +9,10 @@ const AIR_TEMPERATURE_C = { min: -60, max: 70 } as const;
 
 /** A dyno sheet's fields, without the check that its ambient conditions can be true. */
 const dynoSheetFields = z.object({
-  power: z.object({ value: z.number().positive().finite(), unit: z.enum(["hp", "PS", "kW"]) }),
+  power: z.object({
+    value: z.number().positive("Power must be more than 0").finite(),
+    unit: z.enum(["hp", "PS", "kW"]),
+  }),
   measuredAt: z.enum(["wheel", "crank"]),
   /** The standard the printed figure is corrected to; "uncorrected" for observed power. */
   correction: z.enum(CORRECTION_STANDARDS),
@@ -79,17 +82,36 @@ function declarationsSchema<S extends z.ZodType<DynoSheet>>(sheet: S) {
     /** Tyres fitted: a UTQG treadwear grade, or none (race tyres). Absent = not declared yet. */
     tyres: z
       .discriminatedUnion("kind", [
-        z.object({ kind: z.literal("graded"), treadwear: z.number().int().min(0).max(2000) }),
+        z.object({
+          kind: z.literal("graded"),
+          treadwear: z
+            .number()
+            .int("A treadwear grade is a whole number (as on the sidewall)")
+            .min(0, "A treadwear grade is 0 or more")
+            .max(2000, "A treadwear grade is at most 2000 (as on the sidewall)"),
+        }),
         z.object({ kind: z.literal("no-grade") }),
       ])
       .nullable()
       .default(null),
-    modificationPoints: z.number().min(0).nullable().default(null),
-    driverWeightKg: z.number().positive().max(250).nullable().default(null),
+    modificationPoints: z
+      .number()
+      .min(0, "Modification points cannot be below 0")
+      .nullable()
+      .default(null),
+    driverWeightKg: z
+      .number()
+      .positive("A driver's weight is more than 0 kg")
+      .max(250, "A driver's weight is at most 250 kg")
+      .nullable()
+      .default(null),
     /** Ballast fitted when weighed. */
-    ballastKg: z.number().min(0).default(0),
+    ballastKg: z.number().min(0, "Ballast cannot be below 0 kg").default(0),
     engine: z
-      .object({ displacementCc: z.number().positive(), forcedInduction: z.boolean() })
+      .object({
+        displacementCc: z.number().positive("Displacement must be more than 0 cc"),
+        forcedInduction: z.boolean(),
+      })
       .nullable()
       .default(null),
   });

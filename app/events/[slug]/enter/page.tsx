@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { EntryForm } from "@/components/entry-form";
+import { getUserProfile } from "@/db/queries/accounts/get-user-profile";
 import { listAeroPlans } from "@/db/queries/aero-plans/list-aero-plans";
 import { getPublicEvent } from "@/db/queries/entering/get-public-event";
 import { listEnterableCars } from "@/db/queries/entering/list-enterable-cars";
@@ -33,9 +34,10 @@ export default async function EnterEventPage({ params }: { params: Promise<{ slu
     { status: event.status, opensAt: event.entriesOpenAt, closesAt: event.entriesCloseAt },
     clock.now(),
   );
-  const [cars, plans] = await Promise.all([
+  const [cars, plans, profile] = await Promise.all([
     listEnterableCars({ userId: user.id, eventId: event.id }),
     listAeroPlans({ ownerId: user.id }),
+    getUserProfile({ userId: user.id }),
   ]);
   // The pre-check beside each class: each car's newest saved wing plan on its own figures (a
   // car with no plan gets a pointer to the pre-check instead).
@@ -86,6 +88,7 @@ export default async function EnterEventPage({ params }: { params: Promise<{ slu
             describeRuleSet(rules.ruleSet, displayUnits({ length: rules.unitSystem })),
           )}
           classFits={classFits}
+          defaultExperience={profile?.experienceLevel ?? null}
           action={enterEventAction}
         />
       )}
