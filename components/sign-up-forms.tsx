@@ -53,9 +53,12 @@ function Field({
 export function SignUpForms({
   passwordAction,
   emailAction,
+  callbackUrl,
 }: {
   passwordAction: Action;
   emailAction: Action;
+  /** Where to go once confirmed (a same-site path), carried through the account e-mail. */
+  callbackUrl?: string;
 }) {
   const [pw, submitPassword, pwPending] = useActionState(passwordAction, {});
   const [link, submitLink, linkPending] = useActionState(emailAction, {});
@@ -67,6 +70,7 @@ export function SignUpForms({
         noValidate
         aria-labelledby="signup-pw-title"
       >
+        {callbackUrl ? <input type="hidden" name="callbackUrl" value={callbackUrl} /> : null}
         <h2 id="signup-pw-title" className="text-xl font-bold">
           With a password
         </h2>
@@ -110,6 +114,7 @@ export function SignUpForms({
         noValidate
         aria-labelledby="signup-link-title"
       >
+        {callbackUrl ? <input type="hidden" name="callbackUrl" value={callbackUrl} /> : null}
         <h2 id="signup-link-title" className="text-xl font-bold">
           With e-mail links only
         </h2>

@@ -24,6 +24,9 @@ export async function signUp(opts: {
   email: string;
   fullName: string;
   password: string | null;
+  /** A same-site path to open once confirmed (an invitation the person came from); else the
+   *  profile. */
+  next?: string;
 }): Promise<void> {
   // Hashed whether or not the address is new, so both take about as long.
   const passwordHash = opts.password === null ? null : await hashPassword(opts.password);
@@ -46,7 +49,11 @@ export async function signUp(opts: {
       });
     }
     const url = new URL("/sign-up/confirm", appUrl);
-    url.search = new URLSearchParams({ token, email: opts.email }).toString();
+    url.search = new URLSearchParams({
+      token,
+      email: opts.email,
+      ...(opts.next && opts.next !== "/profile" ? { next: opts.next } : {}),
+    }).toString();
     const mail = created
       ? composeAccountLinkMail({
           kind: "new",

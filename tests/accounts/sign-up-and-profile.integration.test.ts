@@ -61,6 +61,41 @@ const profile = {
 };
 
 describe("sign up and profile", () => {
+  it("comes back to the page it came from (a co-driver invitation), never to another site", async () => {
+    // Source: OWASP Unvalidated Redirects and Forwards Cheat Sheet — only same-site paths are
+    // taken as a place to return to.
+    const since = Date.now();
+    const email = "invited.codriver@accounts.test";
+    const answer = await submitPageForm(
+      new HttpSession(appUrl),
+      `/sign-up?callbackUrl=${encodeURIComponent("/invites/some-invitation-token")}`,
+      LINK_FORM,
+      { email, fullName: "Jo Invited" },
+      { "x-forwarded-for": "198.51.100.131" },
+    );
+    expect(answer.status).toBe(303);
+    const [mail] = await accountMail(email, since);
+    const link = mail ? linkIn(mail) : "";
+    expect(new URL(link ?? "").searchParams.get("next")).toBe("/invites/some-invitation-token");
+    expect(await openAccountLink(new HttpSession(appUrl), link ?? "")).toBe(
+      "/invites/some-invitation-token",
+    );
+
+    const elsewhere = Date.now();
+    const other = "elsewhere@accounts.test";
+    await submitPageForm(
+      new HttpSession(appUrl),
+      `/sign-up?callbackUrl=${encodeURIComponent("//evil.test/steal")}`,
+      LINK_FORM,
+      { email: other, fullName: "Jo Elsewhere", callbackUrl: "https://evil.test/" },
+      { "x-forwarded-for": "198.51.100.132" },
+    );
+    const [second] = await accountMail(other, elsewhere);
+    const secondLink = second ? linkIn(second) : "";
+    expect(new URL(secondLink ?? "").searchParams.get("next")).toBeNull();
+    expect(await openAccountLink(new HttpSession(appUrl), secondLink ?? "")).toBe("/profile");
+  });
+
   it("signs up with a password, confirms by the e-mail, saves the profile, is shown by name", async () => {
     const since = Date.now();
     const email = "new.entrant@accounts.test";

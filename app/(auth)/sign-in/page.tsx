@@ -30,7 +30,14 @@ export default async function SignInPage({
       />
       <p className="text-base">
         New to Plumbline?{" "}
-        <Link className="font-semibold text-accent underline" href="/sign-up">
+        <Link
+          className="font-semibold text-accent underline"
+          href={
+            callbackUrl && safeReturnPath(callbackUrl) !== "/home"
+              ? `/sign-up?callbackUrl=${encodeURIComponent(safeReturnPath(callbackUrl))}`
+              : "/sign-up"
+          }
+        >
           Create an account
         </Link>
         .
