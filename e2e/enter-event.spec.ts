@@ -43,8 +43,8 @@ test("an entrant enters the open event with a co-driver, who accepts from the e-
   // A car of this run's own.
   const addCar = page.getByTestId("add-car-form");
   await addCar.getByLabel("Make").fill("Mazda");
-  await addCar.getByLabel("Model").fill(model);
-  await addCar.getByLabel("Year").fill("2001");
+  await addCar.getByLabel("Model", { exact: true }).fill(model);
+  await addCar.getByLabel("Model year").fill("2001");
   await addCar.getByLabel("Colour").fill("Silver");
   await addCar.getByRole("button", { name: "Add car" }).click();
   await expect(page.getByText(model).first()).toBeVisible();
