@@ -271,6 +271,9 @@ export async function startPaymentsFake(opts: {
             "content-type": type,
             ...(location ? { location } : {}),
             "request-id": newId("req"),
+            // The checkout page is never kept: Back after paying shows where the checkout
+            // stands now (paid), not a stale Pay button.
+            "cache-control": "no-store",
           });
           res.end(body);
         })
