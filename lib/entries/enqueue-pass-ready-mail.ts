@@ -17,7 +17,7 @@ import { signOnState } from "./sign-on-state";
  */
 export async function enqueuePassReadyMail({ entryId }: { entryId: string }, tx: Tx) {
   const facts = await getEntrySignOnFacts({ entryId }, tx);
-  if (!facts || facts.entryStatus !== "entered") return;
+  if (facts?.entryStatus !== "entered") return;
   const waiver = entryWaiverState([facts.driverId, facts.coDriverId], facts.waivers);
   if (!signOnState({ waiver, paid: facts.paid }).signedOn) return;
   const passUrl = new URL(`/entries/${entryId}/pass`, env.APP_URL).toString();

@@ -20,7 +20,10 @@ export function passBlockers(r: PassReadiness): string[] {
   }
   if (r.eventOver) return ["This event is over, so passes are no longer issued."];
   const blockers: string[] = [];
-  if (r.waiver === "missing") blockers.push("Every driver of this entry must sign the waiver: the waiver page shows who has not yet.");
+  if (r.waiver === "missing")
+    blockers.push(
+      "Every driver of this entry must sign the waiver: the waiver page shows who has not yet.",
+    );
   if (r.waiver === "needs-guardian") {
     blockers.push("The waiver needs a parent or guardian to sign it too.");
   }
