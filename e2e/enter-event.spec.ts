@@ -1,6 +1,9 @@
 import { type Browser, expect, test } from "@playwright/test";
 import { demo } from "../tests/support/demo-accounts";
+import { queryTestDb } from "../tests/support/query-test-db";
+import { removeScratchEntries } from "../tests/support/scratch-entries";
 import { SignInPage } from "./pages/sign-in-page";
+import { e2eDatabaseUrl } from "./support/e2e-database-url";
 
 // The entrant's journey into an event on a phone (the "phone" project: Pixel 7): find the open
 // event, add a car and enter it with a co-driver; the co-driver opens the invitation e-mail,
@@ -116,4 +119,15 @@ test("an entrant enters the open event with a co-driver, who accepts from the e-
   await expect(page.getByTestId("step-co-driver")).toHaveAttribute("data-state", "done");
   await co.context.close();
   await entrant.context.close();
+
+  // Leave the demo entrant's garage as the other specs expect it: this run's entry and car go
+  // (removeScratchEntries first lets the worker send the entry's e-mails).
+  const entryId = entryUrl.split("/")[2] ?? "";
+  const [car] = await queryTestDb<{ car_id: string }>(
+    e2eDatabaseUrl(),
+    "select car_id from entries where id = ?",
+    [entryId],
+  );
+  await removeScratchEntries(e2eDatabaseUrl(), [entryId]);
+  await queryTestDb(e2eDatabaseUrl(), "delete from cars where id = ?", [car?.car_id ?? ""]);
 });
